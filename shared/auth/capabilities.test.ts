@@ -1,0 +1,26 @@
+import { describe, expect, it } from 'vitest';
+import { CAPABILITIES, ROLES, can } from './capabilities.ts';
+
+// Source: product.md's role table (tester < editor < admin).
+describe('capability map', () => {
+  it('gives every role the staff area', () => {
+    for (const role of ROLES) expect(can(role, 'lab.enter')).toBe(true);
+  });
+  it('keeps review and publication from testers', () => {
+    expect(can('tester', 'runs.review')).toBe(false);
+    expect(can('tester', 'reports.publish')).toBe(false);
+    expect(can('editor', 'runs.review')).toBe(true);
+    expect(can('editor', 'reports.publish')).toBe(true);
+  });
+  it('keeps user management for admins', () => {
+    expect(can('tester', 'users.manage')).toBe(false);
+    expect(can('editor', 'users.manage')).toBe(false);
+    expect(can('admin', 'users.manage')).toBe(true);
+  });
+  it('gives admins everything and signed-out callers nothing', () => {
+    for (const c of CAPABILITIES) {
+      expect(can('admin', c)).toBe(true);
+      expect(can(null, c)).toBe(false);
+    }
+  });
+});

@@ -1,0 +1,39 @@
+/**
+ * Roles and what each may do: the one map both sides read. The server enforces it
+ * (server/http/require-capability.ts); the client uses it only to hide what a role cannot do.
+ */
+export const ROLES = ['tester', 'editor', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const CAPABILITIES = [
+  'lab.enter', // see the staff area at /lab
+  'catalog.manage', // makers, models, units, instruments
+  'runs.create',
+  'runs.upload',
+  'runs.review', // request changes, approve (never a run one measured: a row-level rule)
+  'reports.publish', // publish, correct, retract
+  'users.manage', // invite staff, set roles, deactivate
+  'settings.manage',
+] as const;
+export type Capability = (typeof CAPABILITIES)[number];
+
+const tester: readonly Capability[] = ['lab.enter', 'catalog.manage', 'runs.create', 'runs.upload'];
+const editor: readonly Capability[] = [...tester, 'runs.review', 'reports.publish'];
+const admin: readonly Capability[] = CAPABILITIES;
+
+export const ROLE_CAPABILITIES: Readonly<Record<Role, readonly Capability[]>> = {
+  tester,
+  editor,
+  admin,
+};
+
+export function can(role: Role | null | undefined, capability: Capability): boolean {
+  if (!role) return false;
+  return ROLE_CAPABILITIES[role].includes(capability);
+}
+
+export const ROLE_LABELS: Readonly<Record<Role, string>> = {
+  tester: 'Tester',
+  editor: 'Editor',
+  admin: 'Admin',
+};

@@ -1,0 +1,36 @@
+import { z } from 'zod';
+
+/**
+ * Stable error codes: clients branch on these, never on messages.
+ * The HTTP status each one answers with lives beside it.
+ */
+export const ERROR_STATUS = {
+  validation_failed: 422,
+  bad_request: 400,
+  unauthenticated: 401,
+  invalid_credentials: 401,
+  forbidden: 403,
+  origin_rejected: 403,
+  not_found: 404,
+  conflict: 409,
+  email_taken: 409,
+  rate_limited: 429,
+  database_unavailable: 503,
+  internal: 500,
+} as const;
+export type ErrorCode = keyof typeof ERROR_STATUS;
+
+export const errorBodySchema = z.object({
+  error: z.object({
+    code: z.string(),
+    message: z.string(),
+    details: z.unknown().optional(),
+  }),
+});
+export type ErrorBody = z.infer<typeof errorBodySchema>;
+
+/** The shape of `details` for validation_failed: one entry per offending field. */
+export interface FieldIssue {
+  path: string;
+  message: string;
+}
