@@ -1,0 +1,88 @@
+import path from 'node:path';
+import fs from 'node:fs';
+import { randomUUID } from 'node:crypto';
+import express, { type Express } from 'express';
+import { pinoHttp } from 'pino-http';
+import type { Logger } from 'pino';
+import type { Config } from './config.ts';
+import type { DbHandles } from './db/knex.ts';
+import type { Mailer } from './mail/mailer.ts';
+import type { Clock, ServiceDeps } from './services/context.ts';
+import { createSessionAuth, type SessionAuth } from './auth/session-auth.ts';
+import { createSignInLimiter, type SignInLimiter } from './auth/sign-in-limiter.ts';
+import { createAuthService } from './services/auth-service.ts';
+import { createUserService } from './services/user-service.ts';
+import { sessionMiddleware } from './http/session-middleware.ts';
+import { originCheck } from './http/origin-check.ts';
+import { apiNotFound, errorMiddleware } from './http/error-middleware.ts';
+import { securityHeaders } from './http/security-headers.ts';
+import { healthRoutes } from './routes/health-routes.ts';
+import { authRoutes } from './routes/auth-routes.ts';
+import { adminUserRoutes } from './routes/admin-user-routes.ts';
+
+export interface AppDeps {
+  config: Config;
+  db: DbHandles;
+  mailer: Mailer;
+  clock: Clock;
+  logger: Logger;
+  /** Overridable for tests; built from db.pool when absent. */
+  sessions?: SessionAuth;
+  signInLimiter?: SignInLimiter;
+  /** Folder of the built client (dist/); served when config.serveClient. */
+  clientDir?: string;
+}
+
+/** Builds the Express app. Connects to nothing by itself: every collaborator is passed in. */
+export function createApp(deps: AppDeps): Express {
+  const { config, db, logger } = deps;
+  const sessions = deps.sessions ?? createSessionAuth(db.pool);
+  const signInLimiter =
+    deps.signInLimiter ?? createSignInLimiter(db.pool, config.SIGN_IN_MAX_FAILURES, config.SIGN_IN_WINDOW_MINUTES);
+  const serviceDeps: ServiceDeps = { db: db.knex, clock: deps.clock, sessions, signInLimiter, mailer: deps.mailer, logger };
+  const auth = createAuthService(serviceDeps);
+  const users = createUserService(serviceDeps);
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', config.TRUST_PROXY);
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (req, res) => {
+        const id = randomUUID();
+        res.setHeader('X-Request-Id', id);
+        return id;
+      },
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+    }),
+  );
+  app.use(securityHeaders);
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(sessionMiddleware(sessions));
+  api.use(originCheck(config.ALLOWED_ORIGINS.split(',').map((s) => s.trim()).filter(Boolean)));
+  api.use(healthRoutes(db.knex));
+  api.use(authRoutes(auth));
+  api.use(adminUserRoutes(users));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (config.serveClient) {
+    const clientDir = deps.clientDir ?? path.resolve(import.meta.dirname, '..', 'dist');
+    const indexHtml = path.join(clientDir, 'index.html');
+    if (!fs.existsSync(indexHtml)) {
+      logger.warn({ clientDir }, 'client not built: run "npm run build" to serve the web pages');
+    }
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    // Every other path is a client route: the app decides what to show (incl. "page not found").
+    app.get('/{*splat}', (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(indexHtml);
+    });
+  }
+
+  app.use(errorMiddleware(logger));
+  return app;
+}

@@ -1,0 +1,42 @@
+import { z } from 'zod';
+
+/**
+ * Configuration, read once at start through this schema. .env.example lists every variable.
+ * Nothing else in server/ reads process.env.
+ */
+const booleanFromString = z
+  .enum(['true', 'false', '1', '0', 'yes', 'no', ''])
+  .transform((v) => v === 'true' || v === '1' || v === 'yes');
+
+export const configSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  HOST: z.string().min(1).default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  DATABASE_URL: z.string().url().optional(),
+  BENCHLIGHT_PG_PORT: z.coerce.number().int().min(1024).max(65535).default(54329),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  /** Extra origins allowed to send state-changing requests (comma-separated), besides the request's own host. */
+  ALLOWED_ORIGINS: z.string().default(''),
+  /** Serve the built client from dist/ (always on in production). */
+  SERVE_CLIENT: booleanFromString.optional(),
+  /** Number of proxy hops to trust for X-Forwarded-* (https detection, client IP). */
+  TRUST_PROXY: z.coerce.number().int().min(0).max(10).default(0),
+  /** Failed sign-ins allowed per account and per IP within the window; the next one gets 429. */
+  SIGN_IN_MAX_FAILURES: z.coerce.number().int().min(1).max(1000).default(10),
+  SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(15),
+  /** SMTP server for outgoing e-mail; without it, mail is written to the log. */
+  SMTP_URL: z.string().url().optional(),
+  MAIL_FROM: z.string().default('Benchlight <no-reply@benchlight.invalid>'),
+});
+
+export type Config = z.infer<typeof configSchema> & { serveClient: boolean };
+
+export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
+  const parsed = configSchema.safeParse(env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
+  }
+  const c = parsed.data;
+  return { ...c, serveClient: c.SERVE_CLIENT ?? c.NODE_ENV === 'production' };
+}

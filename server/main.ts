@@ -1,0 +1,34 @@
+/**
+ * Starts the web server: reads the configuration once, connects, listens.
+ * PORT (default 3000) on HOST (default 127.0.0.1).
+ */
+import { loadConfig } from './config.ts';
+import { createDb, closeDb } from './db/knex.ts';
+import { resolveDatabaseUrl } from './db/database-url.ts';
+import { createLogger } from './logger.ts';
+import { createMailer } from './mail/mailer.ts';
+import { createApp } from './app.ts';
+
+const config = loadConfig();
+const logger = createLogger(config.LOG_LEVEL);
+const db = createDb(resolveDatabaseUrl(process.env), (err) => logger.warn({ err: err.message }, 'database connection error'));
+const mailer = createMailer({ smtpUrl: config.SMTP_URL, from: config.MAIL_FROM, logger });
+const app = createApp({ config, db, mailer, clock: { now: () => new Date() }, logger });
+
+const server = app.listen(config.PORT, config.HOST, () => {
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : config.PORT;
+  const host = config.HOST === '0.0.0.0' ? '127.0.0.1' : config.HOST;
+  logger.info({ port, host: config.HOST }, 'listening');
+  console.log(`Benchlight is running at http://${host}:${port}/`);
+});
+
+function shutdown(signal: string) {
+  logger.info({ signal }, 'shutting down');
+  server.close(() => {
+    void closeDb(db).then(() => process.exit(0));
+  });
+  setTimeout(() => process.exit(0), 5000).unref();
+}
+process.on('SIGTERM', () => shutdown('SIGTERM'));
+process.on('SIGINT', () => shutdown('SIGINT'));

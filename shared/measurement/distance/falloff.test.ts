@@ -1,0 +1,144 @@
+import { describe, expect, it } from 'vitest';
+import { centerAtDistance, falloffExponent, localFalloffExponents } from './falloff.ts';
+
+// Howell's catalogue case B-3 (Siegel & Howell, Thermal Radiation Heat Transfer): configuration
+// factor from a small plane receiver to a parallel rectangle a×b, receiver normal through a corner.
+function cornerFactor(a: number, b: number, c: number): number {
+  const X = a / c;
+  const Y = b / c;
+  const sx = Math.sqrt(1 + X * X);
+  const sy = Math.sqrt(1 + Y * Y);
+  return (X / sx * Math.atan(Y / sx) + Y / sy * Math.atan(X / sy)) / (2 * Math.PI);
+}
+// Centre of an a×b rectangle: four corners of (a/2)×(b/2).
+const centreFactor = (a: number, b: number, c: number) => 4 * cornerFactor(a / 2, b / 2, c);
+
+describe('falloffExponent', () => {
+  it('is exactly 2 for a point source', () => {
+    // Inverse-square law of a point source (computed).
+    const planes = [15, 30, 60].map((d) => ({ distanceCm: d, center: 1e4 / (d * d) }));
+    expect(falloffExponent(planes)).toBeCloseTo(2, 12);
+  });
+
+  it('gives about 0.55 for a large body panel read at 15, 30 and 61 cm', () => {
+    // Common practice, no source: 60, 50 and 28 mW/cm² at 15, 30 and 61 cm → exponent near 0.55.
+    const planes = [
+      { distanceCm: 15, center: 60 },
+      { distanceCm: 30, center: 50 },
+      { distanceCm: 61, center: 28 },
+    ];
+    expect(falloffExponent(planes)!).toBeGreaterThan(0.5);
+    expect(falloffExponent(planes)!).toBeLessThan(0.6);
+    expect(falloffExponent(planes)!).toBeCloseTo(0.544, 3); // least squares by hand (computed)
+  });
+
+  it('works in any length unit', () => {
+    const cm = [
+      { distanceCm: 15, center: 0.693784 },
+      { distanceCm: 30, center: 0.408164 },
+    ];
+    const m = cm.map((p) => ({ distanceCm: p.distanceCm / 100, center: p.center }));
+    expect(falloffExponent(m)).toBeCloseTo(falloffExponent(cm)!, 12);
+  });
+
+  it('is null without two distances carrying a positive centre reading', () => {
+    expect(falloffExponent([])).toBeNull();
+    expect(falloffExponent([{ distanceCm: 15, center: 60 }])).toBeNull();
+    expect(
+      falloffExponent([
+        { distanceCm: 15, center: 60 },
+        { distanceCm: 30, center: null },
+        { distanceCm: 60, center: 0 },
+        { distanceCm: 15, center: 62 },
+      ]),
+    ).toBeNull();
+  });
+});
+
+describe('localFalloffExponents', () => {
+  it('matches the B-3 configuration factors of a 0.3 × 0.9 m Lambertian panel', () => {
+    // Howell's catalogue B-3 (Siegel & Howell): centre factors 0.693784 / 0.408164 / 0.172521 (computed).
+    expect(centreFactor(0.3, 0.9, 0.15)).toBeCloseTo(0.693784, 6);
+    expect(centreFactor(0.3, 0.9, 0.3)).toBeCloseTo(0.408164, 6);
+    expect(centreFactor(0.3, 0.9, 0.6)).toBeCloseTo(0.172521, 6);
+    const planes = [
+      { distanceCm: 30, center: 0.408164 },
+      { distanceCm: 15, center: 0.693784 },
+      { distanceCm: 60, center: 0.172521 },
+    ];
+    const local = localFalloffExponents(planes);
+    expect(local.map((l) => [l.fromCm, l.toCm])).toEqual([
+      [15, 30],
+      [30, 60],
+    ]);
+    // Secant exponents ln(F₁/F₂)/ln 2 (computed); each lies between the point values
+    // 0.544, 0.997, 1.483 at 0.15, 0.30, 0.60 m (computed from B-3).
+    expect(local[0].exponent).toBeCloseTo(Math.log(0.693784 / 0.408164) / Math.LN2, 10);
+    expect(local[0].exponent).toBeGreaterThan(0.544);
+    expect(local[0].exponent).toBeLessThan(0.997);
+    expect(local[1].exponent).toBeGreaterThan(0.997);
+    expect(local[1].exponent).toBeLessThan(1.483);
+  });
+
+  it('approaches the point values of the B-3 panel over narrow intervals', () => {
+    // c = −d ln E / d ln d of the 0.3 × 0.9 m panel: 0.544 / 0.997 / 1.483 / 1.967 at
+    // 0.15 / 0.30 / 0.60 / 3 m (computed from Howell's catalogue B-3).
+    for (const [d, c] of [
+      [15, 0.544],
+      [30, 0.997],
+      [60, 1.483],
+      [300, 1.967],
+    ]) {
+      const planes = [d * 0.999, d * 1.001].map((x) => ({ distanceCm: x, center: centreFactor(30, 90, x) }));
+      expect(localFalloffExponents(planes)[0].exponent).toBeCloseTo(c, 3);
+    }
+  });
+
+  it('averages repeated readings at one distance and skips unusable ones', () => {
+    const local = localFalloffExponents([
+      { distanceCm: 10, center: 99 },
+      { distanceCm: 10, center: 101 },
+      { distanceCm: 15, center: null },
+      { distanceCm: 20, center: 25 },
+    ]);
+    expect(local).toEqual([{ fromCm: 10, toCm: 20, exponent: 2 }]);
+  });
+});
+
+describe('centerAtDistance', () => {
+  const planes = [
+    { distanceCm: 15, center: centreFactor(30, 90, 15) },
+    { distanceCm: 30, center: centreFactor(30, 90, 30) },
+    { distanceCm: 60, center: centreFactor(30, 90, 60) },
+  ];
+
+  it('returns measured centres at measured distances', () => {
+    expect(centerAtDistance(planes, 30)).toBe(planes[1].center);
+    expect(centerAtDistance(planes, 60)).toBe(planes[2].center);
+  });
+
+  it('interpolates a power law exactly for a point source', () => {
+    // Inverse-square law (computed): 100 at 10 cm → 100/2.25 at 15 cm.
+    const point = [10, 20, 40].map((d) => ({ distanceCm: d, center: 1e4 / (d * d) }));
+    expect(centerAtDistance(point, 15)).toBeCloseTo(1e4 / 225, 10);
+  });
+
+  it('follows the B-3 panel between doubling distances within 5 %, reading low', () => {
+    // Howell's catalogue B-3 at 20, 22.5 and 45 cm (computed): a panel's exponent rises with
+    // distance, so ln E is concave in ln d and the chord under-reads (about 4 % mid-segment).
+    for (const d of [20, 22.5, 45]) {
+      const ratio = centerAtDistance(planes, d)! / centreFactor(30, 90, d);
+      expect(ratio).toBeLessThan(1);
+      expect(ratio).toBeGreaterThan(0.95);
+    }
+  });
+
+  it('is null outside the measured range unless asked to extrapolate', () => {
+    expect(centerAtDistance(planes, 10)).toBeNull();
+    expect(centerAtDistance(planes, 90)).toBeNull();
+    const c = Math.log(planes[1].center / planes[2].center) / Math.LN2;
+    expect(centerAtDistance(planes, 120, { extrapolate: true })).toBeCloseTo(planes[2].center * 2 ** -c, 12);
+    expect(centerAtDistance(planes.slice(0, 1), 15)).toBeNull();
+    expect(centerAtDistance(planes, 0)).toBeNull();
+  });
+});

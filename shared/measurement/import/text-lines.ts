@@ -1,0 +1,54 @@
+import { issue, type ImportIssue } from './import-issue.ts';
+
+/**
+ * First step of every importer: refuse what is not text, drop a UTF-8 byte-order mark and cut
+ * the text into lines (LF, CRLF or old-style CR). Line i of the result is line i + 1 of the file.
+ */
+export type TextLinesResult = { lines: string[]; issue: null } | { lines: null; issue: ImportIssue };
+
+const SAMPLE_CHARS = 8192;
+
+export function splitTextLines(text: string): TextLinesResult {
+  if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
+  if (text.trim() === '') {
+    return { lines: null, issue: issue(null, 'empty_file', 'error', 'The file is empty.') };
+  }
+  const problem = notTextProblem(text);
+  if (problem) return { lines: null, issue: problem };
+
+  const lines = text.includes('\n') ? text.split('\n') : text.split('\r');
+  for (let i = 0; i < lines.length; i++) {
+    const line = lines[i];
+    if (line.charCodeAt(line.length - 1) === 13) lines[i] = line.slice(0, -1);
+  }
+  return { lines, issue: null };
+}
+
+/** UTF-16 read as UTF-8 shows a NUL beside every ASCII character; other binaries show control bytes. */
+function notTextProblem(text: string): ImportIssue | null {
+  const sample = text.slice(0, SAMPLE_CHARS);
+  let nul = 0;
+  let control = 0;
+  for (let i = 0; i < sample.length; i++) {
+    const c = sample.charCodeAt(i);
+    if (c === 0) nul++;
+    else if ((c < 32 && c !== 9 && c !== 10 && c !== 13) || c === 0xfffd) control++;
+  }
+  if (nul > sample.length * 0.2) {
+    return issue(
+      null,
+      'utf16',
+      'error',
+      'The file looks like UTF-16 text read as UTF-8. Save it as UTF-8 (or plain CSV) and upload it again.',
+    );
+  }
+  if (nul > 0 || control > sample.length * 0.05) {
+    return issue(
+      null,
+      'not_text',
+      'error',
+      'The file is not a text export (it contains binary data). Export the spectrum as CSV or tab-separated text.',
+    );
+  }
+  return null;
+}

@@ -1,0 +1,49 @@
+import { mergeRepeatedPoints, POSITION_TOLERANCE_CM, type PlanePoint } from './plane-points.ts';
+import { selectSpreadRow, spreadWidthAlongRow, type SpreadWidth } from './spread-width.ts';
+import { footprintUniformity, type FootprintCm, type UniformityStats } from './uniformity.ts';
+
+/** The trade's reporting levels, % of the plane's peak. */
+export const STANDARD_LEVELS_PCT = [80, 50, 25] as const;
+
+export interface PlaneAnalysisOptions {
+  /** Emitting area, cm; without it there are no footprint figures. */
+  footprint?: FootprintCm;
+  /** Spread-width levels, % of the peak; default 80, 50, 25. */
+  levelsPct?: readonly number[];
+}
+
+export interface PlaneAnalysis {
+  /** Distinct positions after averaging repeats. */
+  points: number;
+  /** Largest reading of the plane (null without readings); same unit as the input. */
+  peak: number | null;
+  /** Reading at (0, 0), null when not measured. */
+  center: number | null;
+  /** Row the widths are measured along. */
+  spreadRowYCm: number | null;
+  spreadWidths: SpreadWidth[];
+  /** Levels (%) whose width ran into the end of the measured row. */
+  widthAtEdge: number[];
+  footprint: UniformityStats | null;
+}
+
+/** Scalar figures of one plane. Readings in any one irradiance unit; results in that unit. */
+export function analyzePlane(points: readonly PlanePoint[], options: PlaneAnalysisOptions = {}): PlaneAnalysis {
+  const merged = mergeRepeatedPoints(points);
+  const levels = options.levelsPct ?? STANDARD_LEVELS_PCT;
+  const peak = merged.length > 0 ? Math.max(...merged.map((p) => p.value)) : null;
+  const centrePoint = merged.find(
+    (p) => Math.abs(p.xCm) < POSITION_TOLERANCE_CM && Math.abs(p.yCm) < POSITION_TOLERANCE_CM,
+  );
+  const row = selectSpreadRow(merged);
+  const spreadWidths = levels.map((pct) => spreadWidthAlongRow(row?.points ?? [], peak ?? 0, pct));
+  return {
+    points: merged.length,
+    peak,
+    center: centrePoint ? centrePoint.value : null,
+    spreadRowYCm: row ? row.yCm : null,
+    spreadWidths,
+    widthAtEdge: spreadWidths.filter((w) => w.atEdge).map((w) => w.pct),
+    footprint: options.footprint ? footprintUniformity(merged, options.footprint) : null,
+  };
+}

@@ -1,0 +1,19 @@
+import { Link } from 'react-router-dom';
+import { Cautions } from '../../../components/cautions.tsx';
+
+export function PublicFooter() {
+  return (
+    <footer className="mt-section border-t border-rule bg-paper-sunk">
+      <div className="mx-auto max-w-page space-y-6 px-gutter py-8">
+        <Cautions title="Cautions for anyone using these devices" />
+        <p className="max-w-measure text-sm text-ink-soft">
+          Benchlight publishes measurements, not medical advice. We buy or borrow the units we test and take no
+          payment from their makers.
+        </p>
+        <p className="font-sans text-xs text-ink-muted">
+          Benchlight · <Link to="/methodology">How we measure</Link> · <Link to="/lab">Staff sign-in</Link>
+        </p>
+      </div>
+    </footer>
+  );
+}
