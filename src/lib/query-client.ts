@@ -1,4 +1,4 @@
-import { QueryClient, type DefaultOptions } from '@tanstack/react-query';
+import { MutationCache, QueryCache, QueryClient, type DefaultOptions } from '@tanstack/react-query';
 import { isApiError } from './api-client.ts';
 
 /** Retry only what may pass on a second try: no answer, or a 5xx. Never a 4xx. */
@@ -19,8 +19,19 @@ export const queryConfig = {
   },
 } satisfies DefaultOptions;
 
-export function createQueryClient(overrides?: DefaultOptions): QueryClient {
+export interface QueryClientSetup {
+  overrides?: DefaultOptions;
+  /** Called when any query or mutation is answered 401 unauthenticated (the session ended). */
+  onUnauthenticated?: () => void;
+}
+
+export function createQueryClient({ overrides, onUnauthenticated }: QueryClientSetup = {}): QueryClient {
+  const onError = (error: unknown) => {
+    if (isApiError(error) && error.code === 'unauthenticated') onUnauthenticated?.();
+  };
   return new QueryClient({
+    queryCache: new QueryCache({ onError }),
+    mutationCache: new MutationCache({ onError }),
     defaultOptions: {
       queries: { ...queryConfig.queries, ...overrides?.queries },
       mutations: { ...queryConfig.mutations, ...overrides?.mutations },

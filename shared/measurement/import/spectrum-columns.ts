@@ -60,7 +60,7 @@ export function chooseIrradianceColumn(
     const unitText = unitLine?.[index] ?? '';
     const unit = parseUnitSpelling(name) ?? (unitText ? parseUnitSpelling(unitText) : null);
     const points = score(`${name} ${unitText}`, unit);
-    others.push({ index, unit, name });
+    if (points >= 0) others.push({ index, unit, name });
     if (points > bestScore) {
       best = { index, unit, name };
       bestScore = points;

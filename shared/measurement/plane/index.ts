@@ -16,3 +16,4 @@ export {
   type ZoneCoverage,
   type ZoneCoverageOptions,
 } from './zone-coverage.ts';
+export { planeCoverage, type PlaneCoverage, type PlaneCoverageOptions } from './plane-coverage.ts';

@@ -18,7 +18,7 @@ export function RoleOverview({ displayName, role }: { displayName: string; role:
     <div className="grid gap-8 lg:grid-cols-[2fr_1fr]">
       <section aria-labelledby="role-can" className="max-w-measure">
         <h2 id="role-can" className="text-xl font-semibold">
-          As {ROLE_LABELS[role].toLowerCase() === 'admin' ? 'an' : 'a'} {ROLE_LABELS[role]}, you can
+          As {/^[aeiou]/i.test(ROLE_LABELS[role]) ? 'an' : 'a'} {ROLE_LABELS[role]}, you can
         </h2>
         <ul className="mt-3 list-disc space-y-1.5 pl-6 marker:text-signal">
           {ROLE_CAPABILITIES[role]

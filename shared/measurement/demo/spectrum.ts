@@ -1,0 +1,57 @@
+/**
+ * Spectra as a silicon array spectroradiometer would report them: the emitters' line shapes
+ * scaled by the model irradiance, plus a residual dark offset and noise that grows where the
+ * detector's responsivity falls (blue and past 1000 nm).
+ */
+import { lineShapePerNm } from './line-shapes.ts';
+import type { DemoEmitter } from './units.ts';
+
+/** Uniform wavelength grid, nm, from..to inclusive. */
+export function uniformWavelengthsNm(fromNm: number, toNm: number, stepNm: number): number[] {
+  const n = Math.round((toNm - fromNm) / stepNm) + 1;
+  return Array.from({ length: n }, (_, i) => fromNm + i * stepNm);
+}
+
+/** Pixel wavelengths of a grating array: a quadratic calibration, slightly non-uniform. */
+export function pixelWavelengthsNm(pixels: number, c0: number, c1: number, c2: number): number[] {
+  return Array.from({ length: pixels }, (_, p) => c0 + c1 * p + c2 * p * p);
+}
+
+/** Relative responsivity of a silicon array spectrometer (peak 1 near 720 nm); a smooth stand-in. */
+export function siliconResponsivity(wavelengthNm: number): number {
+  return 0.08 + 0.92 * Math.exp(-(((wavelengthNm - 720) / 300) ** 4));
+}
+
+/** Noise-free spectral irradiance, W/m²/nm, from per-emitter irradiance in mW/cm². */
+export function modelSpectrumWm2nm(emitters: readonly DemoEmitter[], perEmitterMwCm2: readonly number[], wavelengthsNm: readonly number[]): number[] {
+  return wavelengthsNm.map((wl) => emitters.reduce((s, e, k) => s + perEmitterMwCm2[k] * 10 * lineShapePerNm(e, wl), 0));
+}
+
+export interface InstrumentNoise {
+  /** Noise floor at peak responsivity, as a fraction of the spectrum's peak. */
+  floorOfPeak: number;
+  /** Shot-like noise, as a fraction of √(signal·peak). */
+  shotOfPeak: number;
+  /** Residual dark offset (one value per spectrum), standard deviation as a fraction of the peak. */
+  darkOffsetOfPeak: number;
+}
+
+export const DEFAULT_NOISE: InstrumentNoise = { floorOfPeak: 6e-4, shotOfPeak: 3e-3, darkOffsetOfPeak: 4e-4 };
+
+/**
+ * Adds instrument noise to a model spectrum. The spectrometer sets its integration time from the
+ * peak, so the noise scales with the peak rather than with absolute irradiance.
+ */
+export function addInstrumentNoise(
+  spectrum: readonly number[],
+  wavelengthsNm: readonly number[],
+  gauss: () => number,
+  noise: InstrumentNoise = DEFAULT_NOISE,
+): number[] {
+  const peak = Math.max(...spectrum);
+  const offset = noise.darkOffsetOfPeak * peak * gauss();
+  return spectrum.map((s, i) => {
+    const sigma = (noise.floorOfPeak * peak) / siliconResponsivity(wavelengthsNm[i]) + noise.shotOfPeak * Math.sqrt(Math.max(s, 0) * peak);
+    return s + offset + sigma * gauss();
+  });
+}

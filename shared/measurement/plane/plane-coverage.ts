@@ -1,0 +1,33 @@
+import { coverageMap, type CoverageMap, type CoverageMapOptions } from './coverage-map.ts';
+import { planeField, type PlaneField } from './interpolate.ts';
+import { isolines, levelsFromPercent, type Isoline } from './isolines.ts';
+import { mergeRepeatedPoints, type PlanePoint } from './plane-points.ts';
+
+export interface PlaneCoverageOptions extends CoverageMapOptions {
+  /** Isoline levels, % of the plane's peak (default 80, 50, 25). */
+  levelsPct?: readonly number[];
+  /** Extra isolines at absolute irradiance levels, in the readings' unit. */
+  absoluteLevels?: readonly number[];
+}
+
+export interface PlaneCoverage {
+  peak: number | null;
+  field: PlaneField;
+  map: CoverageMap | null;
+  /** Percentage levels first, then absolute levels, in the order given. */
+  isolines: Isoline[];
+}
+
+/** Coverage map, isolines and areas of one plane (readings in any one irradiance unit). */
+export function planeCoverage(points: readonly PlanePoint[], options: PlaneCoverageOptions = {}): PlaneCoverage {
+  const merged = mergeRepeatedPoints(points);
+  const peak = merged.length > 0 ? Math.max(...merged.map((p) => p.value)) : null;
+  const field = planeField(merged);
+  const map = coverageMap(field, options);
+  if (!map || peak === null) return { peak, field, map, isolines: [] };
+  const levels = [
+    ...levelsFromPercent(peak, options.levelsPct ?? [80, 50, 25]),
+    ...(options.absoluteLevels ?? []).map((value) => ({ levelPct: null, value })),
+  ];
+  return { peak, field, map, isolines: isolines(map, levels) };
+}

@@ -1,0 +1,100 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { ComponentType } from 'react';
+import {
+  Outlet,
+  ScrollRestoration,
+  createBrowserRouter,
+  type LoaderFunction,
+  useRouteError,
+  type RouteObject,
+} from 'react-router-dom';
+import { ErrorState } from '../components/error-state.tsx';
+import { MinimalShell } from '../components/minimal-shell.tsx';
+import { Spinner } from '../components/spinner.tsx';
+
+/** What a lazily loaded route module may export. */
+interface RouteModule {
+  default: ComponentType;
+  clientLoader?: (queryClient: QueryClient) => LoaderFunction;
+  ErrorBoundary?: ComponentType;
+}
+
+/** Turns a route module into the pieces react-router wants, giving loaders the query client. */
+const convert =
+  (queryClient: QueryClient) =>
+  ({ default: Component, clientLoader, ErrorBoundary }: RouteModule) => ({
+    Component,
+    ...(clientLoader ? { loader: clientLoader(queryClient) } : {}),
+    ...(ErrorBoundary ? { ErrorBoundary } : {}),
+  });
+
+function Root() {
+  return (
+    <>
+      <ScrollRestoration />
+      <Outlet />
+    </>
+  );
+}
+
+function RootError() {
+  const error = useRouteError();
+  return (
+    <MinimalShell>
+      <ErrorState error={error} onRetry={() => window.location.reload()} />
+    </MinimalShell>
+  );
+}
+
+function RootFallback() {
+  return (
+    <div className="mx-auto max-w-page px-gutter py-10">
+      <Spinner label="Loading Benchlight…" />
+    </div>
+  );
+}
+
+export function createRoutes(queryClient: QueryClient): RouteObject[] {
+  const c = convert(queryClient);
+  return [
+    {
+      id: 'root',
+      Component: Root,
+      ErrorBoundary: RootError,
+      HydrateFallback: RootFallback,
+      children: [
+        {
+          // Public site: a pathless layout around the reader's pages.
+          lazy: () => import('./routes/public/layout.tsx').then(c),
+          children: [
+            { index: true, lazy: () => import('./routes/public/home.tsx').then(c) },
+            { path: 'reports', lazy: () => import('./routes/public/reports.tsx').then(c) },
+            { path: 'compare', lazy: () => import('./routes/public/compare.tsx').then(c) },
+            { path: 'methodology', lazy: () => import('./routes/public/methodology.tsx').then(c) },
+            { path: 'request', lazy: () => import('./routes/public/request.tsx').then(c) },
+            { path: 'subscribe', lazy: () => import('./routes/public/subscribe.tsx').then(c) },
+            { path: '*', lazy: () => import('./routes/public/not-found.tsx').then(c) },
+          ],
+        },
+        { path: 'lab/sign-in', lazy: () => import('./routes/lab/sign-in.tsx').then(c) },
+        {
+          // Staff area: the layout's loader sends signed-out visitors to sign in.
+          path: 'lab',
+          lazy: () => import('./routes/lab/layout.tsx').then(c),
+          children: [
+            { index: true, lazy: () => import('./routes/lab/overview.tsx').then(c) },
+            { path: 'runs', lazy: () => import('./routes/lab/runs.tsx').then(c) },
+            { path: 'catalog', lazy: () => import('./routes/lab/catalog.tsx').then(c) },
+            { path: 'review', lazy: () => import('./routes/lab/review.tsx').then(c) },
+            { path: 'admin/users', lazy: () => import('./routes/lab/admin-users.tsx').then(c) },
+            { path: '*', lazy: () => import('./routes/lab/not-found.tsx').then(c) },
+          ],
+        },
+      ],
+    },
+  ];
+}
+
+export function createAppRouter(queryClient: QueryClient) {
+  return createBrowserRouter(createRoutes(queryClient));
+}

@@ -1,0 +1,16 @@
+import { NotYetBuilt } from '../../../components/not-yet-built.tsx';
+import { RequireCapability } from '../../require-capability.tsx';
+
+export default function CatalogRoute() {
+  return (
+    <RequireCapability capability="catalog.manage" action="manage the catalog">
+      <NotYetBuilt
+        eyebrow="Lab"
+        title="Catalog"
+        backTo="/lab"
+        backLabel="Back to the overview"
+        willHold="makers, their models, the units we hold (each with its serial number) and our instruments with their calibration records."
+      />
+    </RequireCapability>
+  );
+}

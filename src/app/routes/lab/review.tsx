@@ -1,0 +1,16 @@
+import { NotYetBuilt } from '../../../components/not-yet-built.tsx';
+import { RequireCapability } from '../../require-capability.tsx';
+
+export default function ReviewRoute() {
+  return (
+    <RequireCapability capability="runs.review" action="review runs">
+      <NotYetBuilt
+        eyebrow="Lab"
+        title="Review"
+        backTo="/lab"
+        backLabel="Back to the overview"
+        willHold="runs submitted for review: check the readings, the numbers and the write-up, then request changes or approve. A run you measured goes to another editor."
+      />
+    </RequireCapability>
+  );
+}

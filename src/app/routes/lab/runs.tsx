@@ -1,0 +1,16 @@
+import { NotYetBuilt } from '../../../components/not-yet-built.tsx';
+import { RequireCapability } from '../../require-capability.tsx';
+
+export default function RunsRoute() {
+  return (
+    <RequireCapability capability="runs.create" action="create runs">
+      <NotYetBuilt
+        eyebrow="Lab"
+        title="Runs"
+        backTo="/lab"
+        backLabel="Back to the overview"
+        willHold="the runs of the lab: create a run for a unit and an instrument, set its grid of distances and positions, upload the exports for each reading, fix problems the importer finds and submit the run for review."
+      />
+    </RequireCapability>
+  );
+}

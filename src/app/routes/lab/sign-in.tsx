@@ -1,0 +1,22 @@
+import { useNavigate } from 'react-router-dom';
+import { Cautions } from '../../../components/cautions.tsx';
+import { MinimalShell } from '../../../components/minimal-shell.tsx';
+import { PageHeader } from '../../../components/page-header.tsx';
+import { SignInForm } from '../../../features/auth/components/sign-in-form.tsx';
+import { useSafeNext } from '../../../features/auth/hooks/use-safe-next.ts';
+
+export default function SignInRoute() {
+  const navigate = useNavigate();
+  const next = useSafeNext();
+  return (
+    <MinimalShell>
+      <div className="mx-auto max-w-md">
+        <PageHeader eyebrow="Benchlight Lab" title="Staff sign-in" />
+        <SignInForm onSignedIn={() => void navigate(next, { replace: true })} />
+      </div>
+      <div className="mx-auto mt-section max-w-page">
+        <Cautions headingLevel={2} title="The cautions we print beside every figure" className="opacity-100" />
+      </div>
+    </MinimalShell>
+  );
+}

@@ -1,0 +1,5 @@
+import { NotFound } from '../../../components/not-found.tsx';
+
+export default function PublicNotFoundRoute() {
+  return <NotFound />;
+}

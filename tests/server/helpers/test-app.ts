@@ -1,0 +1,51 @@
+import { inject } from 'vitest';
+import pino from 'pino';
+import request from 'supertest';
+import { randomUUID } from 'node:crypto';
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { createApp } from '../../../server/app.ts';
+import { loadConfig, type Config } from '../../../server/config.ts';
+import { createDb, closeDb, type DbHandles } from '../../../server/db/knex.ts';
+import { hashPassword } from '../../../server/auth/password.ts';
+import type { Mailer, MailMessage } from '../../../server/mail/mailer.ts';
+import type { Role } from '../../../shared/auth/capabilities.ts';
+
+/**
+ * The real app on the real test database, listening on an ephemeral 127.0.0.1 port so the
+ * Origin check sees a real host; mail is collected in memory. `origin` is the app's own origin.
+ */
+export async function makeTestApp(overrides: Partial<Record<string, string>> = {}) {
+  const config: Config = loadConfig({ NODE_ENV: 'test', LOG_LEVEL: 'silent', ...overrides });
+  const db: DbHandles = createDb(inject('databaseUrl'), () => {});
+  const sent: MailMessage[] = [];
+  const mailer: Mailer = { send: async (m) => void sent.push(m) };
+  const app = createApp({ config, db, mailer, clock: { now: () => new Date() }, logger: pino({ level: 'silent' }) });
+  const server = await new Promise<Server>((resolve) => {
+    const s = app.listen(0, '127.0.0.1', () => resolve(s));
+  });
+  const origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  const close = async () => {
+    await new Promise<void>((resolve) => server.close(() => resolve()));
+    await closeDb(db);
+  };
+  return { app, db, sent, origin, api: () => request(origin), agent: () => request.agent(origin), close };
+}
+
+export async function insertUser(db: DbHandles, role: Role, opts: { email?: string; password?: string; active?: boolean } = {}) {
+  const id = randomUUID();
+  const email = opts.email ?? `${role}-${id.slice(0, 8)}@lab.test`;
+  const password = opts.password ?? `pw-${role}-long-enough`;
+  await db.knex('users').insert({
+    id, email, display_name: `${role} person`, role, active: opts.active ?? true, password_hash: await hashPassword(password),
+  });
+  return { id, email, password };
+}
+
+/** A supertest agent signed in as the given user (keeps the session cookie). */
+export async function signedInAgent(origin: string, email: string, password: string) {
+  const agent = request.agent(origin);
+  const res = await agent.post('/api/auth/sign-in').set('Origin', origin).send({ email, password });
+  if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return agent;
+}
