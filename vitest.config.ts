@@ -1,10 +1,12 @@
 import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
 
-// Three projects, fastest first. The server project shares one test database and resets it
-// between files, so it must run with --no-file-parallelism (see package.json "test:server").
+// Four projects, fastest first: shared (pure units), server (real PostgreSQL), client
+// (components in jsdom), browser (real Chromium against the real server). The server tests
+// share one database reset between files, so files run one at a time (2 cores anyway).
 export default defineConfig({
   test: {
+    fileParallelism: false,
     projects: [
       {
         test: {
@@ -31,6 +33,16 @@ export default defineConfig({
           include: ['src/**/*.test.tsx', 'src/**/*.test.ts'],
           environment: 'jsdom',
           setupFiles: ['src/test/setup.ts'],
+        },
+      },
+      {
+        test: {
+          name: 'browser',
+          include: ['tests/browser/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/browser/global-setup.ts'],
+          testTimeout: 60000,
+          hookTimeout: 120000,
         },
       },
     ],

@@ -18,12 +18,12 @@ export function Card({
   return (
     <section className={cn('rounded-md border border-rule bg-paper-raised shadow-sheet', className)}>
       {title ? (
-        <header className="border-b border-rule px-5 py-3">
+        <div className="border-b border-rule px-5 py-3">
           <Heading className="text-lg font-semibold">{title}</Heading>
-        </header>
+        </div>
       ) : null}
       <div className="px-5 py-4">{children}</div>
-      {footer ? <footer className="border-t border-rule px-5 py-3">{footer}</footer> : null}
+      {footer ? <div className="border-t border-rule px-5 py-3">{footer}</div> : null}
     </section>
   );
 }

@@ -2,8 +2,19 @@ import { isApiError } from '../lib/api-client.ts';
 import { Button } from './button.tsx';
 import { PageHeader } from './page-header.tsx';
 
-/** A full-page failure: says whether the server was unreachable or what went wrong, offers a retry. */
-export function ErrorState({ error, onRetry }: { error: unknown; onRetry?: () => void }) {
+/**
+ * A failure: says whether the server was unreachable or what went wrong, and offers a retry.
+ * As a page (default) it carries the h1; `inline` puts it inside a page that already has one.
+ */
+export function ErrorState({
+  error,
+  onRetry,
+  inline = false,
+}: {
+  error: unknown;
+  onRetry?: () => void;
+  inline?: boolean;
+}) {
   const unreachable = isApiError(error) ? error.isUnreachable : error instanceof TypeError;
   const title = unreachable ? "Can't reach the server" : 'Something went wrong';
   const message = unreachable
@@ -12,9 +23,13 @@ export function ErrorState({ error, onRetry }: { error: unknown; onRetry?: () =>
       ? error.message
       : 'An unexpected error stopped this page. Try again; if it keeps happening, tell the lab admin.';
   return (
-    <div className="max-w-measure">
-      <PageHeader title={title} />
-      <p className="text-lg text-ink-soft">{message}</p>
+    <div role={inline ? 'alert' : undefined} className="max-w-measure">
+      {inline ? (
+        <h2 className="text-xl font-semibold">{title}</h2>
+      ) : (
+        <PageHeader title={title} />
+      )}
+      <p className="mt-2 text-lg text-ink-soft">{message}</p>
       {onRetry ? (
         <div className="mt-6">
           <Button onClick={onRetry}>Try again</Button>

@@ -16,7 +16,7 @@ export function PageHeader({
   actions?: ReactNode;
 }) {
   return (
-    <header className="mb-8 flex flex-wrap items-end justify-between gap-4 border-b border-rule pb-5">
+    <div className="mb-8 flex flex-wrap items-end justify-between gap-4 border-b border-rule pb-5">
       <title>{`${title} · Benchlight`}</title>
       <div className="max-w-measure">
         {eyebrow ? <p className="bl-label mb-2">{eyebrow}</p> : null}
@@ -24,6 +24,6 @@ export function PageHeader({
         {description ? <div className="mt-3 text-lg text-ink-soft">{description}</div> : null}
       </div>
       {actions ? <div className="flex gap-3">{actions}</div> : null}
-    </header>
+    </div>
   );
 }

@@ -22,9 +22,22 @@ export function siliconResponsivity(wavelengthNm: number): number {
   return 0.08 + 0.92 * Math.exp(-(((wavelengthNm - 720) / 300) ** 4));
 }
 
-/** Noise-free spectral irradiance, W/m²/nm, from per-emitter irradiance in mW/cm². */
-export function modelSpectrumWm2nm(emitters: readonly DemoEmitter[], perEmitterMwCm2: readonly number[], wavelengthsNm: readonly number[]): number[] {
-  return wavelengthsNm.map((wl) => emitters.reduce((s, e, k) => s + perEmitterMwCm2[k] * 10 * lineShapePerNm(e, wl), 0));
+/** Each emitter's line shape sampled on a wavelength grid, 1/nm: [emitter][wavelength]. */
+export function sampledLineShapes(emitters: readonly DemoEmitter[], wavelengthsNm: readonly number[]): number[][] {
+  return emitters.map((e) => wavelengthsNm.map((wl) => lineShapePerNm(e, wl)));
+}
+
+/**
+ * Noise-free spectral irradiance, W/m²/nm, from per-emitter irradiance in mW/cm² and the line
+ * shapes sampled on the output grid (1 mW/cm² = 10 W/m²).
+ */
+export function modelSpectrumWm2nm(shapes: readonly (readonly number[])[], perEmitterMwCm2: readonly number[]): number[] {
+  const out = new Array<number>(shapes[0]?.length ?? 0).fill(0);
+  shapes.forEach((shape, k) => {
+    const wm2 = perEmitterMwCm2[k] * 10;
+    for (let i = 0; i < out.length; i++) out[i] += wm2 * shape[i];
+  });
+  return out;
 }
 
 export interface InstrumentNoise {
@@ -36,7 +49,7 @@ export interface InstrumentNoise {
   darkOffsetOfPeak: number;
 }
 
-export const DEFAULT_NOISE: InstrumentNoise = { floorOfPeak: 6e-4, shotOfPeak: 3e-3, darkOffsetOfPeak: 4e-4 };
+export const DEFAULT_NOISE: InstrumentNoise = { floorOfPeak: 3e-4, shotOfPeak: 3e-3, darkOffsetOfPeak: 4e-4 };
 
 /**
  * Adds instrument noise to a model spectrum. The spectrometer sets its integration time from the
@@ -44,14 +57,15 @@ export const DEFAULT_NOISE: InstrumentNoise = { floorOfPeak: 6e-4, shotOfPeak: 3
  */
 export function addInstrumentNoise(
   spectrum: readonly number[],
-  wavelengthsNm: readonly number[],
+  /** siliconResponsivity at each wavelength (computed once per grid). */
+  responsivity: readonly number[],
   gauss: () => number,
   noise: InstrumentNoise = DEFAULT_NOISE,
 ): number[] {
   const peak = Math.max(...spectrum);
   const offset = noise.darkOffsetOfPeak * peak * gauss();
   return spectrum.map((s, i) => {
-    const sigma = (noise.floorOfPeak * peak) / siliconResponsivity(wavelengthsNm[i]) + noise.shotOfPeak * Math.sqrt(Math.max(s, 0) * peak);
+    const sigma = (noise.floorOfPeak * peak) / responsivity[i] + noise.shotOfPeak * Math.sqrt(Math.max(s, 0) * peak);
     return s + offset + sigma * gauss();
   });
 }

@@ -21,9 +21,13 @@ export interface UnitIrradiance {
   ledCount: number;
 }
 
+function geometryOf(unit: DemoUnit) {
+  return { widthCm: unit.widthCm, heightCm: unit.heightCm, pitchCm: unit.ledPitchCm };
+}
+
 /** Relative weight of each emitter type at each LED, bin spread included: [emitter][led]. */
 export function emitterLedWeights(unit: DemoUnit, seed: number): number[][] {
-  const leds = ledPositionsCm(unit);
+  const leds = ledPositionsCm(geometryOf(unit));
   const nx = Math.max(1, Math.round(unit.widthCm / unit.ledPitchCm));
   const gauss = normalFrom(mulberry32(hashSeed(`${seed}:${unit.id}:leds`)));
   const bins = leds.map(() => Math.max(0.5, 1 + unit.ledBinSpread * gauss()));
@@ -43,7 +47,7 @@ export function unitIrradiance(unit: DemoUnit, points: readonly ReceiverPoint[],
   const weights = emitterLedWeights(unit, seed);
   const centre: ReceiverPoint = { xCm: 0, yCm: 0, distanceCm: 15 };
   const all = [centre, ...points];
-  const raw = weights.map((w) => makeArrayIrradianceEvaluator(unit, all, w)(n));
+  const raw = weights.map((w) => makeArrayIrradianceEvaluator(geometryOf(unit), all, w)(n));
   const centreTotal = raw.reduce((s, r) => s + r[0], 0);
   const scale = unit.centerAt15CmMwCm2 / centreTotal;
   const perEmitterMwCm2 = points.map((_, p) => raw.map((r) => r[p + 1] * scale));

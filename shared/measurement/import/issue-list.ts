@@ -20,6 +20,12 @@ export class IssueList {
     return this.issues.some((i) => i.severity === 'error');
   }
 
+  /** Withdraws every issue of one code (when a file-level error says it all). */
+  remove(code: string): void {
+    for (let i = this.issues.length - 1; i >= 0; i--) if (this.issues[i].code === code) this.issues.splice(i, 1);
+    this.counts.delete(code);
+  }
+
   /** Adds the summaries of what was left out and returns the list. */
   finish(): ImportIssue[] {
     for (const [code, count] of this.counts) {
@@ -30,6 +36,7 @@ export class IssueList {
         );
       }
     }
-    return this.issues;
+    // Located issues in file order, then those about the whole file.
+    return this.issues.sort((a, b) => (a.line ?? Infinity) - (b.line ?? Infinity));
   }
 }

@@ -59,7 +59,7 @@ function fromCandidate(c: Candidate): TableLocation {
 }
 
 export function locateTable(lines: readonly string[]): TableLocation | null {
-  let candidate: Candidate | null = null;
+  let candidate = null as Candidate | null;
   for (let i = 0; i < lines.length; i++) {
     const text = lines[i];
     if (isBlankLine(text) || i === candidate?.unitLineIndex) continue;

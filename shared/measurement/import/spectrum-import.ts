@@ -231,6 +231,7 @@ function checkRowCounts(samples: RawSamples, table: TableLocation, issues: Issue
   if (samples.numericRows > 0 && samples.count === 0 && samples.outOfRangeRows > 0) {
     const lo = samples.minSeenNm;
     const hi = samples.maxSeenNm;
+    issues.remove('wavelength_out_of_range');
     const hint = hi <= 3 ? ' They look like micrometres: label the column "Wavelength (µm)".' : lo >= 2000 ? ' They look like ångström: label the column "Wavelength (Å)".' : '';
     issues.add(
       null,

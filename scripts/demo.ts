@@ -1,0 +1,42 @@
+/**
+ * npm run demo: the whole app with demo data on this machine. Starts the project's
+ * PostgreSQL (unless DATABASE_URL is set), migrates, seeds the demo, builds the client and
+ * runs the server, which serves both the API and the pages. Ctrl-C stops the server;
+ * `npm run db:stop` stops PostgreSQL.
+ */
+import { spawn } from 'node:child_process';
+import path from 'node:path';
+import { start } from '../server/db/embedded-postgres.ts';
+import { resolveDatabaseUrl } from '../server/db/database-url.ts';
+import { DEMO_USERS } from '../seeds/data/demo-users.ts';
+import { knexCli, runStep, ROOT } from './lib/run-step.ts';
+
+async function main() {
+  if (process.env.NODE_ENV === 'production') throw new Error('The demo does not run with NODE_ENV=production.');
+  if (!process.env.DATABASE_URL) {
+    console.log('▶ PostgreSQL (embedded, 127.0.0.1)');
+    await start();
+  }
+  const databaseUrl = resolveDatabaseUrl();
+  knexCli('Migrate', ['migrate:latest'], databaseUrl);
+  knexCli('Seed the demo data', ['seed:run'], databaseUrl);
+  runStep('Build the web client', process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn']);
+
+  console.log('\nDemo accounts:');
+  for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(7)} ${u.email}  /  ${u.password}`);
+  console.log('');
+  const server = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'main.ts')], {
+    cwd: ROOT,
+    stdio: 'inherit',
+    env: { ...process.env, SERVE_CLIENT: 'true', DATABASE_URL: databaseUrl },
+  });
+  const forward = (signal: NodeJS.Signals) => server.kill(signal);
+  process.on('SIGINT', forward);
+  process.on('SIGTERM', forward);
+  server.on('exit', (code) => process.exit(code ?? 0));
+}
+
+main().catch((err: unknown) => {
+  console.error(`\n✖ ${err instanceof Error ? err.message : String(err)}`);
+  process.exit(1);
+});

@@ -1,0 +1,96 @@
+/**
+ * Before the browser tests: a fresh database with the demo seed, the built client, and the
+ * real server started on a free 127.0.0.1 port. Chromium must exist (npm test installs it):
+ * without it this fails rather than skipping.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import net from 'node:net';
+import path from 'node:path';
+import type { TestProject } from 'vitest/node';
+import { start, ensureDatabase, dropDatabase } from '../../server/db/embedded-postgres.ts';
+import { resolveDatabaseUrl, withDatabase } from '../../server/db/database-url.ts';
+import { CHROMIUM_PATH } from '../../scripts/lib/chromium.ts';
+import { knexCli, runStep, ROOT } from '../../scripts/lib/run-step.ts';
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    baseUrl: string;
+    chromiumPath: string;
+  }
+}
+
+const E2E_DATABASE = 'benchlight_e2e';
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = net.createServer();
+    srv.listen(0, '127.0.0.1', () => {
+      const port = (srv.address() as net.AddressInfo).port;
+      srv.close(() => resolve(port));
+    });
+    srv.on('error', reject);
+  });
+}
+
+async function waitHealthy(url: string, child: ChildProcess, log: () => string) {
+  const deadline = Date.now() + 60_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`The server exited (${child.exitCode}):\n${log()}`);
+    try {
+      const res = await fetch(`${url}/api/health`);
+      if (res.ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`The server did not become healthy within 60 s:\n${log()}`);
+}
+
+let server: ChildProcess | null = null;
+
+export default async function setup(project: TestProject) {
+  if (!fs.existsSync(CHROMIUM_PATH)) {
+    throw new Error(
+      `Chromium not found at ${CHROMIUM_PATH}: the browser tests cannot run. ` +
+        'Run "npm test" (it installs Chromium as root) or: apt-get install -y chromium',
+    );
+  }
+  let databaseUrl: string;
+  if (process.env.DATABASE_URL) {
+    databaseUrl = process.env.E2E_DATABASE_URL ?? withDatabase(process.env.DATABASE_URL, E2E_DATABASE);
+  } else {
+    await start(() => {});
+    await dropDatabase(E2E_DATABASE);
+    await ensureDatabase(E2E_DATABASE);
+    databaseUrl = withDatabase(resolveDatabaseUrl(), E2E_DATABASE);
+  }
+  knexCli('Migrate the browser-test database', ['migrate:latest'], databaseUrl);
+  knexCli('Seed the browser-test database', ['seed:run'], databaseUrl);
+  if (!fs.existsSync(path.join(ROOT, 'dist', 'index.html'))) {
+    runStep('Build the client', process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn']);
+  }
+
+  const port = await freePort();
+  let output = '';
+  server = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'main.ts')], {
+    cwd: ROOT,
+    env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', DATABASE_URL: databaseUrl, SERVE_CLIENT: 'true', LOG_LEVEL: 'warn' },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  server.stdout?.on('data', (d) => (output += d));
+  server.stderr?.on('data', (d) => (output += d));
+  const baseUrl = `http://127.0.0.1:${port}`;
+  await waitHealthy(baseUrl, server, () => output);
+
+  project.provide('baseUrl', baseUrl);
+  project.provide('chromiumPath', CHROMIUM_PATH);
+
+  return async () => {
+    if (server && server.exitCode === null) {
+      server.kill('SIGTERM');
+      await new Promise((r) => server!.once('exit', r));
+    }
+  };
+}

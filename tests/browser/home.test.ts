@@ -1,0 +1,31 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { openBrowser } from './helpers/browser.ts';
+
+describe('public site in Chromium', () => {
+  let b: Awaited<ReturnType<typeof openBrowser>>;
+  beforeAll(async () => {
+    b = await openBrowser();
+  });
+  afterAll(() => b.close());
+
+  it('shows the product name, the main navigation and the cautions', async () => {
+    await b.page.goto('/');
+    await expect(b.page.title()).resolves.toMatch(/Benchlight/);
+    const nav = b.page.getByRole('navigation', { name: 'Main' });
+    for (const name of ['Reports', 'Compare', 'Methodology', 'Request a test', 'Subscribe']) {
+      expect(await nav.getByRole('link', { name }).count(), name).toBe(1);
+    }
+    const footer = await b.page.locator('footer').innerText();
+    expect(footer).toMatch(/measurements, not medical advice/i);
+    expect(footer).toMatch(/near-infrared/i);
+  });
+
+  it('says plainly when a page is not built yet, and answers unknown paths with a not-found page', async () => {
+    await b.page.goto('/');
+    await b.page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Compare' }).click();
+    await b.page.waitForURL('**/compare');
+    expect(await b.page.locator('main').innerText()).toMatch(/not built yet/i);
+    await b.page.goto('/no/such/page');
+    expect(await b.page.getByRole('heading', { level: 1 }).innerText()).toMatch(/not found/i);
+  });
+});
