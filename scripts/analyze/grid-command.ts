@@ -1,1 +1,188 @@
-export async function runGridCommand(_args: string[]): Promise<number> { process.stderr.write('grid: not built yet\n'); return 2; }
+/**
+ * `analyze.ts grid [--footprint WxH] FILE`
+ * Imports a meter-readings file (distance_cm, x_cm, y_cm, irradiance_mw_cm2) and prints one JSON
+ * document: per plane (sorted by distance) the peak, centre, spread widths at 80/50/25 % and,
+ * with --footprint, uniformity over the emitting area; plus the falloff exponent of the centres.
+ * Exit codes: 0 file usable (importer warnings go to stderr and into "issues"), 1 file not usable
+ * (missing, unreadable, rejected by the importer, no readings), 2 bad command line.
+ */
+import { readFile, stat } from 'node:fs/promises';
+import { decodeTextBytes } from '../../shared/measurement/import/decode-text.ts';
+import type { ImportIssue } from '../../shared/measurement/import/import-issue.ts';
+import { importMeterReadings, type MeterReading } from '../../shared/measurement/import/meter-readings-import.ts';
+import { falloffExponent } from '../../shared/measurement/distance/falloff.ts';
+import { analyzePlane } from '../../shared/measurement/plane/analyze-plane.ts';
+import type { FootprintCm } from '../../shared/measurement/plane/uniformity.ts';
+
+export const GRID_USAGE =
+  'usage: analyze.ts grid [--footprint WxH] FILE\n' +
+  '  FILE         meter readings with columns distance_cm, x_cm, y_cm, irradiance_mw_cm2\n' +
+  '  --footprint  emitting area W × H in cm (e.g. 34x80, 34X80 or 34×80) for uniformity figures\n' +
+  'Prints one JSON document. Exit 0: file usable; 1: file not usable; 2: bad command line.\n';
+
+/** Larger files are not a bench grid. */
+const MAX_FILE_BYTES = 64 * 1024 * 1024;
+/** Distances closer than this (cm) are one plane: tolerates float noise in files. */
+const SAME_DISTANCE_CM = 1e-6;
+
+export interface GridPlaneReport {
+  distanceCm: number;
+  points: number;
+  peakMwCm2: number | null;
+  centerMwCm2: number | null;
+  spreadWidthCm: { '80': number; '50': number; '25': number };
+  widthAtEdge: number[];
+  footprint: { minOverMean: number | null; minOverMax: number | null; cv: number | null; nonUniformityPct: number | null } | null;
+}
+
+export interface GridReport {
+  file: string;
+  planes: GridPlaneReport[];
+  falloffExponent: number | null;
+  issues: ImportIssue[];
+}
+
+/** `34x80`, `34 X 80`, `34×80`, `34.5x80` → cm; null when malformed or not positive. */
+export function parseFootprintCm(text: string): FootprintCm | null {
+  const m = /^\s*(\d+(?:\.\d+)?)\s*[xX×]\s*(\d+(?:\.\d+)?)\s*$/.exec(text);
+  if (!m) return null;
+  const widthCm = Number(m[1]);
+  const heightCm = Number(m[2]);
+  return widthCm > 0 && heightCm > 0 ? { widthCm, heightCm } : null;
+}
+
+type ParsedArgs =
+  | { ok: true; file: string; footprint: FootprintCm | null }
+  | { ok: false; message: string; exitCode: number };
+
+function parseArgs(args: string[]): ParsedArgs {
+  let footprint: FootprintCm | null = null;
+  const files: string[] = [];
+  let optionsEnded = false;
+  for (let i = 0; i < args.length; i++) {
+    const arg = args[i];
+    if (optionsEnded || !arg.startsWith('--')) {
+      files.push(arg);
+      continue;
+    }
+    if (arg === '--') {
+      optionsEnded = true;
+      continue;
+    }
+    if (arg === '--help') return { ok: false, message: '', exitCode: 0 };
+    const eq = arg.indexOf('=');
+    const name = eq === -1 ? arg : arg.slice(0, eq);
+    if (name !== '--footprint') return { ok: false, message: `unknown option ${arg}`, exitCode: 2 };
+    const value = eq === -1 ? args[++i] : arg.slice(eq + 1);
+    if (value === undefined) return { ok: false, message: '--footprint needs a value such as 34x80 (cm)', exitCode: 2 };
+    footprint = parseFootprintCm(value);
+    if (!footprint) {
+      return { ok: false, message: `--footprint "${value}" is not W×H in cm (e.g. 34x80)`, exitCode: 2 };
+    }
+  }
+  if (files.length === 0) return { ok: false, message: 'no file given', exitCode: 2 };
+  if (files.length > 1) return { ok: false, message: `one file at a time (got ${files.length})`, exitCode: 2 };
+  return { ok: true, file: files[0], footprint };
+}
+
+/** Rounds away float noise (10 significant digits) so the JSON reads cleanly. */
+function tidy(v: number): number;
+function tidy(v: number | null): number | null;
+function tidy(v: number | null): number | null {
+  return v === null || !Number.isFinite(v) ? null : Number(v.toPrecision(10));
+}
+
+/** Readings grouped into planes by distance, sorted by distance. */
+function groupPlanes(readings: readonly MeterReading[]): { distanceCm: number; readings: MeterReading[] }[] {
+  const sorted = [...readings].sort((a, b) => a.distanceCm - b.distanceCm);
+  const planes: { distanceCm: number; readings: MeterReading[] }[] = [];
+  for (const r of sorted) {
+    const last = planes[planes.length - 1];
+    if (last && r.distanceCm - last.distanceCm < SAME_DISTANCE_CM) last.readings.push(r);
+    else planes.push({ distanceCm: r.distanceCm, readings: [r] });
+  }
+  return planes;
+}
+
+/** The JSON report for readings already imported (pure: no I/O). */
+export function buildGridReport(
+  file: string,
+  readings: readonly MeterReading[],
+  footprint: FootprintCm | null,
+  issues: ImportIssue[] = [],
+): GridReport {
+  const planes = groupPlanes(readings).map(({ distanceCm, readings: rs }): GridPlaneReport => {
+    const a = analyzePlane(
+      rs.map((r) => ({ xCm: r.xCm, yCm: r.yCm, value: r.irradianceMwCm2 })),
+      footprint ? { footprint, levelsPct: [80, 50, 25] } : { levelsPct: [80, 50, 25] },
+    );
+    const [w80, w50, w25] = a.spreadWidths.map((w) => tidy(w.widthCm));
+    const fp = a.footprint;
+    return {
+      distanceCm: tidy(distanceCm),
+      points: a.points,
+      peakMwCm2: tidy(a.peak),
+      centerMwCm2: tidy(a.center),
+      spreadWidthCm: { '80': w80, '50': w50, '25': w25 },
+      widthAtEdge: a.widthAtEdge,
+      footprint: fp
+        ? {
+            minOverMean: tidy(fp.minOverMean),
+            minOverMax: tidy(fp.minOverMax),
+            cv: tidy(fp.cv),
+            nonUniformityPct: tidy(fp.nonUniformityPct),
+          }
+        : null,
+    };
+  });
+  const exponent = falloffExponent(planes.map((p) => ({ distanceCm: p.distanceCm, center: p.centerMwCm2 })));
+  return { file, planes, falloffExponent: tidy(exponent), issues };
+}
+
+function formatIssue(file: string, i: ImportIssue): string {
+  return `${file}${i.line === null ? '' : `:${i.line}`}: ${i.severity} ${i.code}: ${i.message}\n`;
+}
+
+async function readBytes(file: string): Promise<Uint8Array | string> {
+  try {
+    const info = await stat(file);
+    if (!info.isFile()) return `${file} is not a file`;
+    if (info.size > MAX_FILE_BYTES) return `${file} is larger than ${MAX_FILE_BYTES / 1024 / 1024} MB; it is not a meter-readings file`;
+    return await readFile(file);
+  } catch (err) {
+    return (err as NodeJS.ErrnoException).code === 'ENOENT' ? `${file} does not exist` : `${file} cannot be read`;
+  }
+}
+
+export async function runGridCommand(args: string[]): Promise<number> {
+  const parsed = parseArgs(args);
+  if (!parsed.ok) {
+    if (parsed.exitCode === 0) {
+      process.stdout.write(GRID_USAGE);
+      return 0;
+    }
+    process.stderr.write(`analyze grid: ${parsed.message}\n${GRID_USAGE}`);
+    return parsed.exitCode;
+  }
+  const { file, footprint } = parsed;
+  const bytes = await readBytes(file);
+  if (typeof bytes === 'string') {
+    process.stderr.write(`analyze grid: ${bytes}\n`);
+    return 1;
+  }
+  const decoded = decodeTextBytes(bytes);
+  const result = importMeterReadings(decoded.text);
+  const issues = [...decoded.issues, ...result.issues];
+  for (const i of issues) process.stderr.write(formatIssue(file, i));
+  if (!result.ok) {
+    process.stderr.write(`analyze grid: ${file} cannot be used: the importer rejected it (see the issues above).\n`);
+    return 1;
+  }
+  if (result.readings.length === 0) {
+    process.stderr.write(`analyze grid: ${file} has no readings.\n`);
+    return 1;
+  }
+  const report = buildGridReport(file, result.readings, footprint, issues);
+  process.stdout.write(`${JSON.stringify(report, null, 2)}\n`);
+  return 0;
+}

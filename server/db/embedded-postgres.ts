@@ -114,6 +114,8 @@ function clusterDir(user: string | null): string {
   if (user && !canTraverse(user, DATA_DIR)) {
     const tag = createHash('sha256').update(PROJECT_ROOT).digest('hex').slice(0, 12);
     target = path.join('/var/tmp', `benchlight-pg-${tag}`);
+    // Left by an earlier checkout at this same path whose .data/ is gone: its password is lost.
+    fs.rmSync(target, { recursive: true, force: true });
     fs.mkdirSync(target, { recursive: true, mode: 0o700 });
     fs.symlinkSync(target, CLUSTER_LINK);
   } else {

@@ -1,7 +1,7 @@
 import type { ButtonHTMLAttributes, Ref } from 'react';
 import { cn } from '../lib/cn.ts';
 
-type Variant = 'primary' | 'secondary' | 'quiet' | 'danger';
+type Variant = 'primary' | 'secondary' | 'quiet' | 'danger' | 'inverse';
 type Size = 'md' | 'sm';
 
 const base =
@@ -13,6 +13,8 @@ const variants: Record<Variant, string> = {
   secondary: 'bg-paper-raised text-ink border border-control hover:bg-paper-sunk',
   quiet: 'bg-transparent text-signal border border-transparent underline underline-offset-4 hover:text-signal-strong',
   danger: 'bg-paper-raised text-danger border border-danger hover:bg-danger-tint',
+  /** On the dark (ink) lab header. */
+  inverse: 'bg-transparent text-paper border border-paper hover:bg-ink-soft',
 };
 
 const sizes: Record<Size, string> = {

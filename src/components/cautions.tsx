@@ -1,3 +1,4 @@
+import { useId } from 'react';
 import { cn } from '../lib/cn.ts';
 
 /**
@@ -41,7 +42,7 @@ export function Cautions({
   title?: string;
 }) {
   const Heading = headingLevel === 2 ? 'h2' : 'h3';
-  const headingId = `cautions-${headingLevel}`;
+  const headingId = useId();
   return (
     <section aria-labelledby={headingId} className={cn('border-l-4 border-warn pl-4', className)}>
       <Heading id={headingId} className="bl-label mb-2 text-ink">

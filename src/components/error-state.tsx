@@ -10,13 +10,16 @@ export function ErrorState({
   error,
   onRetry,
   inline = false,
+  title: fallbackTitle = 'Something went wrong',
 }: {
   error: unknown;
+  /** Heading when the server did answer (an unreachable server always says so). */
+  title?: string;
   onRetry?: () => void;
   inline?: boolean;
 }) {
   const unreachable = isApiError(error) ? error.isUnreachable : error instanceof TypeError;
-  const title = unreachable ? "Can't reach the server" : 'Something went wrong';
+  const title = unreachable ? "Can't reach the server" : fallbackTitle;
   const message = unreachable
     ? 'Benchlight could not get an answer from its server. It may be starting up or down. Try again in a moment.'
     : isApiError(error)

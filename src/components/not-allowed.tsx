@@ -12,7 +12,7 @@ export function NotAllowed({ roleLabel, action }: { roleLabel: string; action: s
         </p>
         <p className="text-ink-soft">If you need this, ask the lab's admin to change your role.</p>
         <p className="font-sans text-sm">
-          <Link to="/lab">Back to the overview</Link>
+          <Link to="/lab">Back to lab home</Link>
         </p>
       </div>
     </>

@@ -11,6 +11,7 @@ function shouldRetry(failureCount: number, error: unknown): boolean {
 export const queryConfig = {
   queries: {
     retry: shouldRetry,
+    retryDelay: (attempt: number) => Math.min(500 * 2 ** attempt, 4000),
     staleTime: 30_000,
     refetchOnWindowFocus: false,
   },

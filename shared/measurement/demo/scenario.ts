@@ -63,7 +63,7 @@ export interface ManifestUnit {
   claimedBeamAngle: DemoUnit['claimedBeamAngle'];
   claimedIrradiance: DemoUnit['claimedIrradiance'];
   /** The generating model's truth, for tests and checks; not a measurement. */
-  model: { fullAngleDeg: number; centerMwCm2ByDistanceCm: Record<string, number> };
+  generatingModel: { fullAngleDeg: number; centerMwCm2ByDistanceCm: Record<string, number> };
 }
 
 export interface ManifestRun {
@@ -193,7 +193,7 @@ export function buildDemoScenario(seed: number = DEMO_SEED): { manifest: DemoMan
       ledMix: unit.emitters.map((e) => ({ peakNm: e.peakNm, fwhmNm: e.fwhmNm, powerFraction: e.powerFraction, band: bandOf(e.peakNm) })),
       claimedBeamAngle: unit.claimedBeamAngle,
       claimedIrradiance: unit.claimedIrradiance,
-      model: { fullAngleDeg: unit.modelFullAngleDeg, centerMwCm2ByDistanceCm: centre },
+      generatingModel: { fullAngleDeg: unit.modelFullAngleDeg, centerMwCm2ByDistanceCm: centre },
     });
     runs.push({
       id: runId,

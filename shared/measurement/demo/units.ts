@@ -76,7 +76,7 @@ export const DEMO_UNITS: readonly DemoUnit[] = [
     ledBinSpread: 0.05,
     centerAt15CmMwCm2: 82,
     emitters: [red(630, 17, 0.2), red(660, 19, 0.3), nir(810, 32, 0.1), nir(830, 36, 0.15), nir(850, 38, 0.25)],
-    claimedBeamAngle: { angleDeg: 30, statesHalfAngle: true, wording: 'Beam angle 30° (half angle)' },
+    claimedBeamAngle: { angleDeg: 30, statesHalfAngle: false, wording: 'Beam angle 30°' },
     claimedIrradiance: { mwCm2: 150, distanceCm: 0, wording: '> 150 mW/cm² at the surface' },
   },
   {

@@ -135,7 +135,9 @@ export function fitEffectiveBeamAngle(
     // Printed number read as a full angle vs as a half angle (doubled).
     const asFull = Math.abs(claim.angleDeg - fitted);
     const asHalf = Math.abs(2 * claim.angleDeg - fitted);
-    claimNearerAs = asHalf < asFull ? 'half' : 'full';
+    // Within 1° of a tie neither reading is favoured: keep the sheet's own.
+    if (Math.abs(asHalf - asFull) < 1) claimNearerAs = claim.statesHalfAngle ? 'half' : 'full';
+    else claimNearerAs = asHalf < asFull ? 'half' : 'full';
   }
   return {
     fittedFullAngleDeg: fitted,

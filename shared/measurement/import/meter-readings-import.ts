@@ -4,13 +4,13 @@
  * Semicolon or tab delimiters, decimal commas (with those delimiters), a UTF-8 BOM, CRLF, blank
  * lines, preamble lines before the header and any column order are accepted.
  *
- * Located-issue policy (same as the spectrum importer): a bad row (non-numeric, missing value,
+ * Policy for problems on a line (same as the spectrum importer): a bad row (non-numeric, missing value,
  * negative distance, repeated grid point) is dropped and reported as a warning with its line;
  * the file is rejected (error) when it has no usable row, when most of its rows are bad, or when
  * a column is missing. Never throws on bad data.
  */
 import { issue, type ImportIssue } from './import-issue.ts';
-import { IssueList } from './issue-list.ts';
+import { ProblemList } from './problem-list.ts';
 import { splitTextLines } from './text-lines.ts';
 import {
   detectDelimiter,
@@ -103,8 +103,7 @@ export function importMeterReadings(text: string): MeterReadingsImport {
     ]);
   }
 
-  const issues = new IssueList();
-  const decimalComma = header.delimiter !== ',';
+  const issues = new ProblemList();
   const readings: MeterReading[] = [];
   const seenPoints = new Map<string, number>();
   let dataRows = 0;
@@ -121,7 +120,8 @@ export function importMeterReadings(text: string): MeterReadingsImport {
     let problemColumn: Column = 'distance_cm';
     for (const column of COLUMNS) {
       const cell = cells[header.columnIndex.get(column)!] ?? '';
-      const value = parseDecimalCell(cell, decimalComma);
+      // A comma left inside a split cell is either quoted or under a `;`/tab delimiter: a decimal comma.
+      const value = parseDecimalCell(cell, true);
       if (Number.isNaN(value)) {
         problem = isMissingCell(cell) ? 'missing_value' : looksLikeFormula(cell) ? 'formula_cell' : 'non_numeric_row';
         problemColumn = column;

@@ -2,7 +2,7 @@
  * Puts samples in ascending wavelength order and drops repeated wavelengths, keeping the first
  * occurrence in the file (the repeat is reported with its own line).
  */
-import { IssueList } from './issue-list.ts';
+import { ProblemList } from './problem-list.ts';
 
 export interface OrderedSamples {
   wavelengthNm: Float64Array;
@@ -14,7 +14,7 @@ export function orderSamples(
   values: Float64Array,
   line: Int32Array,
   count: number,
-  issues: IssueList,
+  issues: ProblemList,
 ): OrderedSamples {
   let ascending = true;
   let descending = true;

@@ -5,7 +5,7 @@
  */
 import { parseUnitSpelling, type UnitSpelling } from './unit-spelling.ts';
 
-const WAVELENGTH_NAME = /^(wave\s*-?\s*length|lambda|λ|wl\b|wl[^a-z]|nm\b|wellenl|longueur)/i;
+const WAVELENGTH_NAME = /^(wave\s*-?\s*length|wave\b|wvl|lambda|λ|wl\b|wl[^a-z]|nm\b|wellenl|longueur)/i;
 const NOT_IRRADIANCE =
   /\b(dark|raw|counts?|reference|ref|background|bg|white|std|sd|stdev|sigma|uncertainty|unc|noise|pixel|index|idx|transmittance|reflectance|absorbance|percent|time|temp|temperature|flag|saturated|sat)\b/;
 

@@ -1,22 +1,22 @@
 /**
  * Spectrum importer: text export of a spectroradiometer → ascending wavelengths (nm) and spectral
- * irradiance (W·m⁻²·nm⁻¹), the preamble as metadata, and a list of issues. Never throws on bad data.
+ * irradiance (W·m⁻²·nm⁻¹), the preamble as metadata, and the problems found. Never throws on bad data.
  *
- * Located-issue policy. A bad row — not numeric, an empty/NaN cell, a spreadsheet formula, a
+ * Policy for problems on a line. A bad row — not numeric, an empty/NaN cell, a spreadsheet formula, a
  * wavelength outside 200–2500 nm, a repeated wavelength (the later line) — is DROPPED and reported
  * as a warning with its line; the rest of the file is used. The file is REJECTED (an error, ok=false)
  * when: it is empty, not text (binary, UTF-16 read as UTF-8) or not a delimited table; it has a
  * header but no rows; most of its rows are bad; no wavelength lies in 200–2500 nm (likely µm or Å);
  * fewer than 2 samples remain; no irradiance column can be told apart; or no unit is known
  * (none in the header, the unit line or the preamble, and none given by the caller).
- * At most 20 located issues per code are listed; one closing warning counts the rest.
+ * At most 20 located problems per code are listed; one closing warning counts the rest.
  *
  * Unit precedence: the caller's unit, then the irradiance column's header (or the unit line under
  * it), then a `Units: …` line in the preamble. Disagreements are reported as warnings.
  * Negative irradiance values (noise around zero) are kept: integration is signed.
  */
 import type { ImportIssue } from './import-issue.ts';
-import { IssueList } from './issue-list.ts';
+import { ProblemList } from './problem-list.ts';
 import { splitTextLines } from './text-lines.ts';
 import { isBlankLine } from './delimited-fields.ts';
 import { parseMetadataLine } from './metadata-line.ts';
@@ -58,7 +58,7 @@ export function importSpectrum(text: string, options: SpectrumImportOptions = {}
   const split = splitTextLines(text);
   if (split.lines === null) return rejected([split.issue]);
   const lines = split.lines;
-  const issues = new IssueList();
+  const issues = new ProblemList();
 
   let callerUnit: SpectralIrradianceUnit | null = null;
   if (options.unit !== undefined && options.unit.trim() !== '') {
@@ -166,7 +166,7 @@ function resolveUnit(
   columnUnit: UnitSpelling | null,
   preambleUnit: UnitSpelling | null,
   columnName: string,
-  issues: IssueList,
+  issues: ProblemList,
 ): SpectralIrradianceUnit | null {
   const fileUnit = columnUnit ?? preambleUnit;
   if (columnUnit?.kind === 'spectral' && preambleUnit?.kind === 'spectral' && columnUnit.unit.canonical !== preambleUnit.unit.canonical) {
@@ -205,7 +205,7 @@ function resolveUnit(
   return fileUnit.unit;
 }
 
-function checkRowCounts(samples: RawSamples, table: TableLocation, issues: IssueList): void {
+function checkRowCounts(samples: RawSamples, table: TableLocation, issues: ProblemList): void {
   if (samples.dataRows === 0) {
     issues.add(null, 'no_data', 'error', 'The file has a header but no data rows under it.');
     return;

@@ -3,7 +3,7 @@
  * line without building per-cell strings or running regexes (a quoted or space-separated line
  * takes the slower general path). Bad rows are counted and reported; nothing is thrown.
  */
-import { IssueList } from './issue-list.ts';
+import { ProblemList } from './problem-list.ts';
 import { isBlankLine, isMissingCell, looksLikeFormula, splitFields, type Delimiter } from './delimited-fields.ts';
 import { parseDecimal, parseDecimalCell } from './parse-decimal.ts';
 
@@ -38,7 +38,7 @@ export interface RawSamples {
 export const MIN_WAVELENGTH_NM = 200;
 export const MAX_WAVELENGTH_NM = 2500;
 
-export function readSpectrumRows(lines: readonly string[], from: number, layout: RowLayout, issues: IssueList): RawSamples {
+export function readSpectrumRows(lines: readonly string[], from: number, layout: RowLayout, issues: ProblemList): RawSamples {
   const capacity = Math.max(0, lines.length - from);
   const wavelengthNm = new Float64Array(capacity);
   const irradiance = new Float64Array(capacity);
@@ -79,10 +79,11 @@ export function readSpectrumRows(lines: readonly string[], from: number, layout:
         start = end + 1;
       }
     } else {
+      // A comma left inside a split cell was quoted, so it can only be a decimal comma.
       const cells = splitFields(text, delimiter);
       fields = cells.length;
-      wl = parseDecimalCell(cells[wavelengthIndex] ?? '', decimalComma);
-      e = parseDecimalCell(cells[irradianceIndex] ?? '', decimalComma);
+      wl = parseDecimalCell(cells[wavelengthIndex] ?? '', true);
+      e = parseDecimalCell(cells[irradianceIndex] ?? '', true);
       for (let k = headerWidth; k < cells.length && !extra; k++) extra = cells[k] !== '';
     }
 
@@ -125,18 +126,19 @@ function isBlankSlice(text: string, start: number, end: number): boolean {
   return true;
 }
 
-function reportBadRow(text: string, line: number, layout: RowLayout, issues: IssueList): void {
+function reportBadRow(text: string, line: number, layout: RowLayout, issues: ProblemList): void {
   const cells = splitFields(text, layout.delimiter);
   const wlCell = cells[layout.wavelengthIndex] ?? '';
   const eCell = cells[layout.irradianceIndex] ?? '';
-  if (cells.length <= Math.max(layout.wavelengthIndex, layout.irradianceIndex)) {
-    issues.add(line, 'missing_value', 'warning', `Line ${line} is shorter than the header (a value is missing); the row was left out.`);
-  } else if (looksLikeFormula(wlCell) || looksLikeFormula(eCell)) {
+  const isText = (cell: string) => cell.trim() !== '' && !isMissingCell(cell) && Number.isNaN(parseDecimalCell(cell, true));
+  if (looksLikeFormula(wlCell) || looksLikeFormula(eCell)) {
     issues.add(line, 'formula_cell', 'warning', `Line ${line} holds a spreadsheet formula instead of a number; the row was left out.`);
-  } else if (isMissingCell(wlCell) || isMissingCell(eCell)) {
-    issues.add(line, 'missing_value', 'warning', `Line ${line} has an empty or NaN value; the row was left out.`);
-  } else {
+  } else if (isText(wlCell) || isText(eCell)) {
     const shown = text.length > 40 ? `${text.slice(0, 40)}…` : text;
     issues.add(line, 'non_numeric_row', 'warning', `Line ${line} ("${shown}") does not hold two numbers; the row was left out.`);
+  } else if (cells.length <= Math.max(layout.wavelengthIndex, layout.irradianceIndex)) {
+    issues.add(line, 'missing_value', 'warning', `Line ${line} is shorter than the header (a value is missing); the row was left out.`);
+  } else {
+    issues.add(line, 'missing_value', 'warning', `Line ${line} has an empty or NaN value; the row was left out.`);
   }
 }

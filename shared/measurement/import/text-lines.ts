@@ -27,14 +27,16 @@ export function splitTextLines(text: string): TextLinesResult {
 /** UTF-16 read as UTF-8 shows a NUL beside every ASCII character; other binaries show control bytes. */
 function notTextProblem(text: string): ImportIssue | null {
   const sample = text.slice(0, SAMPLE_CHARS);
-  let nul = 0;
+  const nulAt = [0, 0]; // NULs at even and odd positions
   let control = 0;
   for (let i = 0; i < sample.length; i++) {
     const c = sample.charCodeAt(i);
-    if (c === 0) nul++;
+    if (c === 0) nulAt[i & 1]++;
     else if ((c < 32 && c !== 9 && c !== 10 && c !== 13) || c === 0xfffd) control++;
   }
-  if (nul > sample.length * 0.2) {
+  const half = sample.length / 2;
+  const alternating = (nulAt[0] > half * 0.7 && nulAt[1] < half * 0.1) || (nulAt[1] > half * 0.7 && nulAt[0] < half * 0.1);
+  if (alternating) {
     return issue(
       null,
       'utf16',
@@ -42,7 +44,7 @@ function notTextProblem(text: string): ImportIssue | null {
       'The file looks like UTF-16 text read as UTF-8. Save it as UTF-8 (or plain CSV) and upload it again.',
     );
   }
-  if (nul > 0 || control > sample.length * 0.05) {
+  if (nulAt[0] + nulAt[1] > 0 || control > sample.length * 0.05) {
     return issue(
       null,
       'not_text',

@@ -37,11 +37,12 @@ function tokens(text: string): string[] {
     .replace(/nanomet(?:er|re)s?/g, 'nm')
     .replace(/micromet(?:er|re)s?|microns?/g, 'um')
     .replace(/met(?:er|re)s?/g, 'm')
+    .replace(/\bsq(?:uare|\.)?[\s_]*(cm|mm|m)\b/g, '$12')
     .replace(/\u00b2/g, '2')
     .replace(/\u00b9/g, '1')
     .replace(/[\u207b\u2212\u2013]/g, '-')
     .replace(/\^|\*\*/g, '');
-  return normalised.split(/[^a-z0-9-]+|(?<![a-z])-|-(?![0-9])/).filter((t) => t !== '');
+  return normalised.split(/[^a-z0-9-]+|(?<![a-z])-|-(?![0-9])/).filter((t) => t !== '' && t !== 'per');
 }
 
 /** Returns the unit found in `text`, or null when there is none. */

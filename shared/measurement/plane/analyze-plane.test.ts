@@ -66,6 +66,11 @@ describe('analyzePlane on a Lambertian 34 × 80 cm panel at 15 cm (view-factor g
   });
 
   it('a narrow grid flags the levels that reach its ends', () => {
+    // Howell B-3 model: at x = ±20 cm the panel gives 0.478 of its centre value, above 25 % but
+    // below 50 %, so only the 25 % walk reaches the row ends (40 cm, hand-computed).
+    const edgeRatio = field(20, 0) / field(0, 0);
+    expect(edgeRatio).toBeGreaterThan(0.25);
+    expect(edgeRatio).toBeLessThan(0.5);
     const a = analyzePlane(gridPoints(rangeCm(-20, 20, 2), [0], field));
     expect(a.widthAtEdge).toEqual([25]);
     expect(a.spreadWidths[2].widthCm).toBe(40);

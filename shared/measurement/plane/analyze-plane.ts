@@ -1,4 +1,4 @@
-import { mergeRepeatedPoints, POSITION_TOLERANCE_CM, type PlanePoint } from './plane-points.ts';
+import { mergeRepeatedPoints, peakValue, POSITION_TOLERANCE_CM, type PlanePoint } from './plane-points.ts';
 import { selectSpreadRow, spreadWidthAlongRow, type SpreadWidth } from './spread-width.ts';
 import { footprintUniformity, type FootprintCm, type UniformityStats } from './uniformity.ts';
 
@@ -31,7 +31,7 @@ export interface PlaneAnalysis {
 export function analyzePlane(points: readonly PlanePoint[], options: PlaneAnalysisOptions = {}): PlaneAnalysis {
   const merged = mergeRepeatedPoints(points);
   const levels = options.levelsPct ?? STANDARD_LEVELS_PCT;
-  const peak = merged.length > 0 ? Math.max(...merged.map((p) => p.value)) : null;
+  const peak = peakValue(merged);
   const centrePoint = merged.find(
     (p) => Math.abs(p.xCm) < POSITION_TOLERANCE_CM && Math.abs(p.yCm) < POSITION_TOLERANCE_CM,
   );

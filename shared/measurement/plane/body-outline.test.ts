@@ -9,6 +9,7 @@ const shareOf = (rows: ReturnType<typeof bodyZoneCoverage>, name: string) => row
 
 describe('bodyOverlay', () => {
   it('scales to the chosen shoulder width and height and places the torso centre at the offset', () => {
+    // Our own outline's definition: its bounds are the chosen sizes (hand-computed).
     const body = bodyOverlay({ shoulderWidthCm: 40, heightCm: 170, offsetCm: { xCm: 5, yCm: -10 } });
     const b = ringBoundsCm(body.outline);
     expect(b.maxX - b.minX).toBeCloseTo(40, 9);
@@ -18,6 +19,7 @@ describe('bodyOverlay', () => {
   });
 
   it('every zone lies inside the outline, with and without legs', () => {
+    // Geometry of our own outline: zones are parts of the body (point-in-polygon, even-odd rule).
     for (const legs of [true, false]) {
       const body = bodyOverlay({ legs });
       for (const zone of body.zones) {
@@ -34,6 +36,7 @@ describe('bodyOverlay', () => {
   });
 
   it('the right shoulder is on +x, mirrored by the left one', () => {
+    // A person facing the panel has their right side at +x of the panel's front view (geometry).
     const body = bodyOverlay();
     const right = body.zones.find((z) => z.name === 'right-shoulder');
     const left = body.zones.find((z) => z.name === 'left-shoulder');
@@ -67,6 +70,7 @@ describe('zone shares', () => {
   });
 
   it('outside the measured area counts as not covered', () => {
+    // No extrapolation beyond the readings (common practice, no source).
     // A 20 × 20 cm grid around the chest: the face and thighs were not measured at all.
     const field = planeField(gridPoints(rangeCm(-10, 10, 1), rangeCm(-10, 10, 1), () => 100));
     const rows = bodyZoneCoverage(field.valueAt, body, [50]);

@@ -1,6 +1,6 @@
 /** Plane analysis: one distance's readings → peak, spread widths, uniformity, coverage map, isolines, body shares. */
 export { analyzePlane, STANDARD_LEVELS_PCT, type PlaneAnalysis, type PlaneAnalysisOptions } from './analyze-plane.ts';
-export { mergeRepeatedPoints, POSITION_TOLERANCE_CM, type PlanePoint } from './plane-points.ts';
+export { mergeRepeatedPoints, peakValue, POSITION_TOLERANCE_CM, type PlanePoint } from './plane-points.ts';
 export { selectSpreadRow, spreadWidthAlongRow, type SpreadRow, type SpreadWidth } from './spread-width.ts';
 export { footprintUniformity, uniformityStats, type FootprintCm, type UniformityStats } from './uniformity.ts';
 export { planeField, type PlaneField } from './interpolate.ts';

@@ -14,6 +14,7 @@ describe('planeField', () => {
   });
 
   it('returns NaN outside the measured rectangle (no extrapolation)', () => {
+    // Nothing is claimed beyond the outermost readings (common practice, no source).
     const field = planeField(gridPoints(rangeCm(-2, 2, 1), rangeCm(-2, 2, 1), () => 5));
     expect(field.valueAt(2.01, 0)).toBeNaN();
     expect(field.valueAt(0, -2.5)).toBeNaN();
@@ -35,6 +36,7 @@ describe('planeField', () => {
   });
 
   it('a grid with a missing reading falls back to the triangulation', () => {
+    // f = x + y is linear, so triangle interpolation reproduces it exactly (barycentric coordinates).
     const pts = gridPoints([0, 1, 2], [0, 1, 2], (x, y) => x + y).filter((p) => !(p.xCm === 2 && p.yCm === 2));
     const field = planeField(pts);
     expect(field.method).toBe('delaunay-linear');
@@ -43,6 +45,7 @@ describe('planeField', () => {
   });
 
   it('a single row interpolates along the row only', () => {
+    // Linear interpolation between (0, 0) and (2, 20): 10 at x = 1 (hand-computed).
     const field = planeField(gridPoints([0, 2, 4], [3], (x) => x * 10));
     expect(field.valueAt(1, 3)).toBeCloseTo(10, 12);
     expect(field.valueAt(1, 3.5)).toBeNaN();

@@ -1,7 +1,7 @@
 import { coverageMap, type CoverageMap, type CoverageMapOptions } from './coverage-map.ts';
 import { planeField, type PlaneField } from './interpolate.ts';
 import { isolines, levelsFromPercent, type Isoline } from './isolines.ts';
-import { mergeRepeatedPoints, type PlanePoint } from './plane-points.ts';
+import { mergeRepeatedPoints, peakValue, type PlanePoint } from './plane-points.ts';
 
 export interface PlaneCoverageOptions extends CoverageMapOptions {
   /** Isoline levels, % of the plane's peak (default 80, 50, 25). */
@@ -21,7 +21,7 @@ export interface PlaneCoverage {
 /** Coverage map, isolines and areas of one plane (readings in any one irradiance unit). */
 export function planeCoverage(points: readonly PlanePoint[], options: PlaneCoverageOptions = {}): PlaneCoverage {
   const merged = mergeRepeatedPoints(points);
-  const peak = merged.length > 0 ? Math.max(...merged.map((p) => p.value)) : null;
+  const peak = peakValue(merged);
   const field = planeField(merged);
   const map = coverageMap(field, options);
   if (!map || peak === null) return { peak, field, map, isolines: [] };

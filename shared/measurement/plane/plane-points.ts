@@ -54,3 +54,10 @@ export function mergeRepeatedPoints(points: readonly PlanePoint[]): PlanePoint[]
     .map((e) => ({ xCm: e.xCm, yCm: e.yCm, value: e.sum / e.n }))
     .sort((a, b) => a.yCm - b.yCm || a.xCm - b.xCm);
 }
+
+/** Largest value of a plane's readings, null without readings (no spread: safe for large planes). */
+export function peakValue(points: readonly PlanePoint[]): number | null {
+  let peak: number | null = null;
+  for (const p of points) if (peak === null || p.value > peak) peak = p.value;
+  return peak;
+}

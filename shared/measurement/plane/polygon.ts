@@ -33,7 +33,12 @@ export function ringContains(ring: RingCm, xCm: number, yCm: number): boolean {
 
 /** Axis-aligned bounds of a ring, cm. */
 export function ringBoundsCm(ring: RingCm): { minX: number; maxX: number; minY: number; maxY: number } {
-  const xs = ring.map((p) => p[0]);
-  const ys = ring.map((p) => p[1]);
-  return { minX: Math.min(...xs), maxX: Math.max(...xs), minY: Math.min(...ys), maxY: Math.max(...ys) };
+  const b = { minX: Infinity, maxX: -Infinity, minY: Infinity, maxY: -Infinity };
+  for (const [x, y] of ring) {
+    b.minX = Math.min(b.minX, x);
+    b.maxX = Math.max(b.maxX, x);
+    b.minY = Math.min(b.minY, y);
+    b.maxY = Math.max(b.maxY, y);
+  }
+  return b;
 }

@@ -68,11 +68,13 @@ describe('spreadWidthAlongRow', () => {
 
 describe('selectSpreadRow', () => {
   it('uses y = 0 when measured, within float noise', () => {
+    // The centre line is the reporting row (common practice, no source).
     const points = [...row([-1, 0, 1], [1, 2, 1], 1e-9), ...row([-1, 0, 1], [5, 9, 5], 2)];
     expect(selectSpreadRow(points)?.yCm).toBe(0);
   });
 
   it('without a y = 0 row, uses the row holding the plane peak', () => {
+    // Fallback when the centre line was not measured (common practice, no source).
     const points = [...row([-1, 0, 1], [1, 2, 1], -3), ...row([-1, 0, 1], [5, 9, 5], 3)];
     const chosen = selectSpreadRow(points);
     expect(chosen?.yCm).toBe(3);
@@ -82,6 +84,7 @@ describe('selectSpreadRow', () => {
 
 describe('analyzePlane basics', () => {
   it('averages repeated readings at one position and has no centre without (0, 0)', () => {
+    // Repeats of one point are averaged (common practice, no source); values hand-computed.
     const a = analyzePlane([
       { xCm: -1, yCm: 2, value: 40 },
       { xCm: 0.5, yCm: 2, value: 100 },
@@ -98,6 +101,7 @@ describe('analyzePlane basics', () => {
   });
 
   it('a single reading is its own peak and centre, width 0 at the edge', () => {
+    // Degenerate row: the walk starts and ends at the only reading (hand-computed).
     const a = analyzePlane([{ xCm: 0, yCm: 0, value: 12 }]);
     expect(a.peak).toBe(12);
     expect(a.center).toBe(12);
@@ -106,6 +110,7 @@ describe('analyzePlane basics', () => {
   });
 
   it('no readings', () => {
+    // Nothing measured, nothing reported (hand-computed).
     const a = analyzePlane([]);
     expect(a.peak).toBeNull();
     expect(a.spreadWidths.every((w) => w.widthCm === 0)).toBe(true);

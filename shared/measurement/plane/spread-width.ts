@@ -1,4 +1,4 @@
-import { POSITION_TOLERANCE_CM, type PlanePoint } from './plane-points.ts';
+import { peakValue, POSITION_TOLERANCE_CM, type PlanePoint } from './plane-points.ts';
 
 /** The row a spread width is measured along: y = 0 if measured, else the row holding the peak. */
 export interface SpreadRow {
@@ -30,7 +30,7 @@ export function selectSpreadRow(points: readonly PlanePoint[]): SpreadRow | null
   if (points.some((p) => Math.abs(p.yCm) < POSITION_TOLERANCE_CM)) {
     yCm = 0;
   } else {
-    const peak = Math.max(...points.map((p) => p.value));
+    const peak = peakValue(points);
     const rows = points.filter((p) => p.value === peak).map((p) => p.yCm);
     rows.sort((a, b) => Math.abs(a) - Math.abs(b) || a - b);
     yCm = rows[0];

@@ -16,8 +16,12 @@ export interface UniformityStats {
 export function uniformityStats(values: readonly number[]): UniformityStats {
   const n = values.length;
   if (n === 0) return { points: 0, minOverMean: null, minOverMax: null, cv: null, nonUniformityPct: null };
-  const min = Math.min(...values);
-  const max = Math.max(...values);
+  let min = Infinity;
+  let max = -Infinity;
+  for (const v of values) {
+    min = Math.min(min, v);
+    max = Math.max(max, v);
+  }
   const mean = values.reduce((s, v) => s + v, 0) / n;
   const variance = values.reduce((s, v) => s + (v - mean) ** 2, 0) / n;
   return {

@@ -31,7 +31,7 @@ function UsersPage() {
         {users.isPending ? (
           <Spinner label="Loading staff accounts…" />
         ) : users.isError ? (
-          <ErrorState inline error={users.error} onRetry={() => void users.refetch()} />
+          <ErrorState inline title="Staff accounts could not be loaded" error={users.error} onRetry={() => void users.refetch()} />
         ) : (
           <UsersTable users={users.data} currentUserId={me.data?.user?.id} />
         )}

@@ -8,7 +8,7 @@ export default function CatalogRoute() {
         eyebrow="Lab"
         title="Catalog"
         backTo="/lab"
-        backLabel="Back to the overview"
+        backLabel="Back to lab home"
         willHold="makers, their models, the units we hold (each with its serial number) and our instruments with their calibration records."
       />
     </RequireCapability>

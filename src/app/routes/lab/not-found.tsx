@@ -1,5 +1,5 @@
 import { NotFound } from '../../../components/not-found.tsx';
 
 export default function LabNotFoundRoute() {
-  return <NotFound homeTo="/lab" homeLabel="Go to the lab overview" />;
+  return <NotFound homeTo="/lab" homeLabel="Go to lab home" />;
 }

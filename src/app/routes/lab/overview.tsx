@@ -9,7 +9,7 @@ export default function OverviewRoute() {
   return (
     <>
       <PageHeader eyebrow="Lab" title={`Welcome, ${user.displayName}`} />
-      <RoleOverview displayName={user.displayName} role={user.role} />
+      <RoleOverview role={user.role} />
     </>
   );
 }

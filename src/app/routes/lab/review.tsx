@@ -8,7 +8,7 @@ export default function ReviewRoute() {
         eyebrow="Lab"
         title="Review"
         backTo="/lab"
-        backLabel="Back to the overview"
+        backLabel="Back to lab home"
         willHold="runs submitted for review: check the readings, the numbers and the write-up, then request changes or approve. A run you measured goes to another editor."
       />
     </RequireCapability>

@@ -15,7 +15,7 @@ export default function SignInRoute() {
         <SignInForm onSignedIn={() => void navigate(next, { replace: true })} />
       </div>
       <div className="mx-auto mt-section max-w-page">
-        <Cautions headingLevel={2} title="The cautions we print beside every figure" className="opacity-100" />
+        <Cautions headingLevel={2} title="The cautions we print beside every figure" />
       </div>
     </MinimalShell>
   );

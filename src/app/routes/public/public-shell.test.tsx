@@ -19,7 +19,7 @@ describe('public shell', () => {
       ['Subscribe', '/subscribe'],
     ]);
     expect(screen.getByRole('link', { name: 'Benchlight' }).getAttribute('href')).toBe('/');
-    expect(screen.getAllByRole('link', { name: 'Staff sign-in' })[0].getAttribute('href')).toBe('/lab');
+    expect(screen.getByRole('link', { name: 'Staff sign-in' }).getAttribute('href')).toBe('/lab');
     expect(screen.getByRole('heading', { level: 1 })).toBeTruthy();
     expect(screen.getByText('No reports published yet')).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Skip to main content' }).getAttribute('href')).toBe('#main');

@@ -5,7 +5,6 @@ import type { User } from '../../../../shared/schemas/users.ts';
 import { Alert } from '../../../components/alert.tsx';
 import { Button } from '../../../components/button.tsx';
 import { Select } from '../../../components/select-field.tsx';
-import { VisuallyHidden } from '../../../components/visually-hidden.tsx';
 import { isApiError } from '../../../lib/api-client.ts';
 import { formatDate } from '../../../lib/format.ts';
 import { useUpdateUser } from '../api/update-user.ts';
@@ -80,8 +79,14 @@ function AccessCell({ user, isSelf, report }: { user: User; isSelf: boolean; rep
   if (!user.active) {
     return (
       <div className="flex gap-2">
-        <Button variant="secondary" size="sm" pending={update.isPending} onClick={() => setActive(true)}>
-          Reactivate<VisuallyHidden> {user.email}</VisuallyHidden>
+        <Button
+          variant="secondary"
+          size="sm"
+          aria-label={`Reactivate ${user.email}`}
+          pending={update.isPending}
+          onClick={() => setActive(true)}
+        >
+          Reactivate
         </Button>
       </div>
     );
@@ -91,14 +96,14 @@ function AccessCell({ user, isSelf, report }: { user: User; isSelf: boolean; rep
       <Button
         variant="danger"
         size="sm"
+        aria-label={`${confirming ? 'Confirm deactivate' : 'Deactivate'} ${user.email}`}
         pending={update.isPending}
         onClick={() => (confirming ? setActive(false) : setConfirming(true))}
       >
         {confirming ? 'Confirm deactivate' : 'Deactivate'}
-        <VisuallyHidden> {user.email}</VisuallyHidden>
       </Button>
       {confirming && !update.isPending ? (
-        <Button variant="quiet" size="sm" onClick={() => setConfirming(false)}>
+        <Button variant="quiet" size="sm" aria-label={`Cancel deactivating ${user.email}`} onClick={() => setConfirming(false)}>
           Cancel
         </Button>
       ) : null}

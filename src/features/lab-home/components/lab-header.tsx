@@ -34,11 +34,10 @@ export function LabHeader({
             <span>{ROLE_LABELS[role]}</span>
           </p>
           <Button
-            variant="secondary"
+            variant="inverse"
             size="sm"
             onClick={onSignOut}
             pending={signingOut}
-            className="border-paper bg-ink text-paper hover:bg-ink-soft"
           >
             Sign out
           </Button>

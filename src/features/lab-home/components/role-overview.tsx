@@ -1,4 +1,3 @@
-import { Link } from 'react-router-dom';
 import { ROLE_CAPABILITIES, ROLE_LABELS, type Capability, type Role } from '../../../../shared/auth/capabilities.ts';
 
 /** One sentence per capability, in the lab's words. */
@@ -13,9 +12,9 @@ const CAPABILITY_TEXT: Record<Capability, string> = {
   'settings.manage': 'Change site settings.',
 };
 
-export function RoleOverview({ displayName, role }: { displayName: string; role: Role }) {
+export function RoleOverview({ role }: { role: Role }) {
   return (
-    <div className="grid gap-8 lg:grid-cols-[2fr_1fr]">
+    <div className="space-y-6">
       <section aria-labelledby="role-can" className="max-w-measure">
         <h2 id="role-can" className="text-xl font-semibold">
           As {/^[aeiou]/i.test(ROLE_LABELS[role]) ? 'an' : 'a'} {ROLE_LABELS[role]}, you can
@@ -28,17 +27,9 @@ export function RoleOverview({ displayName, role }: { displayName: string; role:
             ))}
         </ul>
       </section>
-      <aside aria-labelledby="start-here" className="rounded-md border border-rule bg-paper-raised p-5">
-        <h2 id="start-here" className="bl-label">
-          Start here
-        </h2>
-        <p className="mt-2 text-sm text-ink-soft">
-          Welcome back, {displayName}. Runs and the catalog are being built; their pages say what they will hold.
-        </p>
-        <p className="mt-3 font-sans text-sm">
-          <Link to="/lab/runs">Go to runs</Link>
-        </p>
-      </aside>
+      <p className="max-w-measure text-ink-soft">
+        Use the sections in the Lab menu above. Most are still being built; each page says what it will hold.
+      </p>
     </div>
   );
 }

@@ -10,8 +10,8 @@ export function LatestReports() {
       <div className="rounded-md border border-dashed border-rule-strong bg-paper-raised px-6 py-8 text-center">
         <p className="text-lg font-semibold">No reports published yet</p>
         <p className="mt-1 text-ink-soft">
-          The first units are on the bench. <Link to="/subscribe">Subscribe</Link> to hear when a report is out,
-          or <Link to="/request">ask us to test a device</Link>.
+          The first units are on the bench. <Link to="/subscribe">Get an e-mail</Link> when a report is out, or{' '}
+          <Link to="/request">ask us to test a device</Link>.
         </p>
       </div>
     </section>

@@ -11,7 +11,7 @@ export function PublicFooter() {
           payment from their makers.
         </p>
         <p className="font-sans text-xs text-ink-muted">
-          Benchlight · <Link to="/methodology">How we measure</Link> · <Link to="/lab">Staff sign-in</Link>
+          Benchlight · an independent test lab · <Link to="/methodology">How we measure</Link>
         </p>
       </div>
     </footer>

@@ -1,10 +1,10 @@
 import { issue, type ImportIssue, type ImportIssueSeverity } from './import-issue.ts';
 
 /**
- * Collects issues, keeping at most `perCodeLimit` located ones per code so that a file with a
+ * Collects the problems found, keeping at most `perCodeLimit` located ones per code so that a file with a
  * thousand bad rows gives a readable list; the rest are counted in one closing warning.
  */
-export class IssueList {
+export class ProblemList {
   readonly issues: ImportIssue[] = [];
   private readonly counts = new Map<string, number>();
 
@@ -20,7 +20,7 @@ export class IssueList {
     return this.issues.some((i) => i.severity === 'error');
   }
 
-  /** Withdraws every issue of one code (when a file-level error says it all). */
+  /** Withdraws every report of one code (when a file-level error says it all). */
   remove(code: string): void {
     for (let i = this.issues.length - 1; i >= 0; i--) if (this.issues[i].code === code) this.issues.splice(i, 1);
     this.counts.delete(code);
@@ -36,7 +36,7 @@ export class IssueList {
         );
       }
     }
-    // Located issues in file order, then those about the whole file.
+    // Located problems in file order, then those about the whole file.
     return this.issues.sort((a, b) => (a.line ?? Infinity) - (b.line ?? Infinity));
   }
 }
