@@ -38,7 +38,12 @@ export function createApp(deps: AppDeps): Express {
   const { config, db, logger } = deps;
   const sessions = deps.sessions ?? createSessionAuth(db.pool);
   const signInLimiter =
-    deps.signInLimiter ?? createSignInLimiter(db.pool, config.SIGN_IN_MAX_FAILURES, config.SIGN_IN_WINDOW_MINUTES);
+    deps.signInLimiter ??
+    createSignInLimiter(db.pool, {
+      perAccount: config.SIGN_IN_MAX_FAILURES,
+      perIp: config.SIGN_IN_MAX_FAILURES_PER_IP,
+      windowMinutes: config.SIGN_IN_WINDOW_MINUTES,
+    });
   const serviceDeps: ServiceDeps = { db: db.knex, clock: deps.clock, sessions, signInLimiter, mailer: deps.mailer, logger };
   const auth = createAuthService(serviceDeps);
   const users = createUserService(serviceDeps);

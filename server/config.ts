@@ -21,8 +21,10 @@ export const configSchema = z.object({
   SERVE_CLIENT: booleanFromString.optional(),
   /** Number of proxy hops to trust for X-Forwarded-* (https detection, client IP). */
   TRUST_PROXY: z.coerce.number().int().min(0).max(10).default(0),
-  /** Failed sign-ins allowed per account and per IP within the window; the next one gets 429. */
+  /** Failed sign-ins allowed per account within the window; the next one gets 429. */
   SIGN_IN_MAX_FAILURES: z.coerce.number().int().min(1).max(1000).default(10),
+  /** Failed sign-ins allowed per client IP within the window (higher: a lab shares one address). */
+  SIGN_IN_MAX_FAILURES_PER_IP: z.coerce.number().int().min(1).max(10000).default(50),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(15),
   /** SMTP server for outgoing e-mail; without it, mail is written to the log. */
   SMTP_URL: z.string().url().optional(),

@@ -6,7 +6,7 @@
  * Exit codes: 0 file usable (importer warnings go to stderr and into "issues"), 1 file not usable
  * (missing, unreadable, rejected by the importer, no readings), 2 bad command line.
  */
-import { readFile, stat } from 'node:fs/promises';
+import { parseCommandLine, readInputFile, tidy } from './cli-io.ts';
 import { decodeTextBytes } from '../../shared/measurement/import/decode-text.ts';
 import type { ImportIssue } from '../../shared/measurement/import/import-issue.ts';
 import { importMeterReadings, type MeterReading } from '../../shared/measurement/import/meter-readings-import.ts';
@@ -20,8 +20,6 @@ export const GRID_USAGE =
   '  --footprint  emitting area W × H in cm (e.g. 34x80, 34X80 or 34×80) for uniformity figures\n' +
   'Prints one JSON document. Exit 0: file usable; 1: file not usable; 2: bad command line.\n';
 
-/** Larger files are not a bench grid. */
-const MAX_FILE_BYTES = 64 * 1024 * 1024;
 /** Distances closer than this (cm) are one plane: tolerates float noise in files. */
 const SAME_DISTANCE_CM = 1e-6;
 
@@ -51,45 +49,20 @@ export function parseFootprintCm(text: string): FootprintCm | null {
   return widthCm > 0 && heightCm > 0 ? { widthCm, heightCm } : null;
 }
 
-type ParsedArgs =
-  | { ok: true; file: string; footprint: FootprintCm | null }
-  | { ok: false; message: string; exitCode: number };
+type ParsedArgs = { ok: true; help: boolean; file: string; footprint: FootprintCm | null } | { ok: false; message: string };
 
-function parseArgs(args: string[]): ParsedArgs {
+function parseOptions(args: string[]): ParsedArgs {
+  const cl = parseCommandLine(args, ['footprint'] as const);
+  if (!cl.ok) return cl;
   let footprint: FootprintCm | null = null;
-  const files: string[] = [];
-  let optionsEnded = false;
-  for (let i = 0; i < args.length; i++) {
-    const arg = args[i];
-    if (optionsEnded || !arg.startsWith('--')) {
-      files.push(arg);
-      continue;
-    }
-    if (arg === '--') {
-      optionsEnded = true;
-      continue;
-    }
-    if (arg === '--help') return { ok: false, message: '', exitCode: 0 };
-    const eq = arg.indexOf('=');
-    const name = eq === -1 ? arg : arg.slice(0, eq);
-    if (name !== '--footprint') return { ok: false, message: `unknown option ${arg}`, exitCode: 2 };
-    const value = eq === -1 ? args[++i] : arg.slice(eq + 1);
-    if (value === undefined) return { ok: false, message: '--footprint needs a value such as 34x80 (cm)', exitCode: 2 };
-    footprint = parseFootprintCm(value);
-    if (!footprint) {
-      return { ok: false, message: `--footprint "${value}" is not W×H in cm (e.g. 34x80)`, exitCode: 2 };
-    }
+  if (cl.values.footprint !== undefined) {
+    footprint = parseFootprintCm(cl.values.footprint);
+    if (!footprint) return { ok: false, message: `--footprint "${cl.values.footprint}" is not W×H in cm (e.g. 34x80)` };
   }
-  if (files.length === 0) return { ok: false, message: 'no file given', exitCode: 2 };
-  if (files.length > 1) return { ok: false, message: `one file at a time (got ${files.length})`, exitCode: 2 };
-  return { ok: true, file: files[0], footprint };
-}
-
-/** Rounds away float noise (10 significant digits) so the JSON reads cleanly. */
-function tidy(v: number): number;
-function tidy(v: number | null): number | null;
-function tidy(v: number | null): number | null {
-  return v === null || !Number.isFinite(v) ? null : Number(v.toPrecision(10));
+  if (cl.help) return { ok: true, help: true, file: '', footprint };
+  if (cl.files.length === 0) return { ok: false, message: 'no file given' };
+  if (cl.files.length > 1) return { ok: false, message: `one file at a time (got ${cl.files.length})` };
+  return { ok: true, help: false, file: cl.files[0], footprint };
 }
 
 /** Readings grouped into planes by distance, sorted by distance. */
@@ -143,34 +116,23 @@ function formatIssue(file: string, i: ImportIssue): string {
   return `${file}${i.line === null ? '' : `:${i.line}`}: ${i.severity} ${i.code}: ${i.message}\n`;
 }
 
-async function readBytes(file: string): Promise<Uint8Array | string> {
-  try {
-    const info = await stat(file);
-    if (!info.isFile()) return `${file} is not a file`;
-    if (info.size > MAX_FILE_BYTES) return `${file} is larger than ${MAX_FILE_BYTES / 1024 / 1024} MB; it is not a meter-readings file`;
-    return await readFile(file);
-  } catch (err) {
-    return (err as NodeJS.ErrnoException).code === 'ENOENT' ? `${file} does not exist` : `${file} cannot be read`;
-  }
-}
-
 export async function runGridCommand(args: string[]): Promise<number> {
-  const parsed = parseArgs(args);
+  const parsed = parseOptions(args);
   if (!parsed.ok) {
-    if (parsed.exitCode === 0) {
-      process.stdout.write(GRID_USAGE);
-      return 0;
-    }
     process.stderr.write(`analyze grid: ${parsed.message}\n${GRID_USAGE}`);
-    return parsed.exitCode;
+    return 2;
+  }
+  if (parsed.help) {
+    process.stdout.write(GRID_USAGE);
+    return 0;
   }
   const { file, footprint } = parsed;
-  const bytes = await readBytes(file);
-  if (typeof bytes === 'string') {
-    process.stderr.write(`analyze grid: ${bytes}\n`);
+  const read = await readInputFile(file, 'a meter-readings file');
+  if ('problem' in read) {
+    process.stderr.write(`analyze grid: ${read.problem}\n`);
     return 1;
   }
-  const decoded = decodeTextBytes(bytes);
+  const decoded = decodeTextBytes(read.bytes);
   const result = importMeterReadings(decoded.text);
   const issues = [...decoded.issues, ...result.issues];
   for (const i of issues) process.stderr.write(formatIssue(file, i));

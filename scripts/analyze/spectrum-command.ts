@@ -5,7 +5,7 @@
  * Exit codes: 0 every file usable, 1 any file not usable (still reported in the JSON),
  * 2 bad command line (unknown option or unit, malformed --bands, no file).
  */
-import { readFile, stat } from 'node:fs/promises';
+import { parseCommandLine, readInputFile, tidy } from './cli-io.ts';
 import { importSpectrum, KNOWN_UNITS_HINT } from '../../shared/measurement/import/spectrum-import.ts';
 import { decodeTextBytes } from '../../shared/measurement/import/decode-text.ts';
 import { parseSpectralUnit } from '../../shared/measurement/import/unit-spelling.ts';
@@ -20,9 +20,6 @@ export const SPECTRUM_USAGE =
   `  --unit   unit of the irradiance column when the file does not say (${KNOWN_UNITS_HINT};\n` +
   '           other spellings such as "µW/cm²/nm" or "W m-2 nm-1" work too); overrides the file\n' +
   'Prints one JSON document. Exit 0: all files usable; 1: some file not usable; 2: bad command line.\n';
-
-/** Larger files are not spectra from a bench instrument. */
-const MAX_FILE_BYTES = 64 * 1024 * 1024;
 
 interface FileReport {
   file: string;
@@ -43,72 +40,39 @@ interface Options {
   files: string[];
 }
 
-type ParsedArgs = { ok: true; options: Options } | { ok: false; message: string; exitCode: number };
+type ParsedArgs = { ok: true; help: boolean; options: Options } | { ok: false; message: string };
 
-function parseArgs(args: string[]): ParsedArgs {
+function parseOptions(args: string[]): ParsedArgs {
+  const cl = parseCommandLine(args, ['bands', 'unit'] as const);
+  if (!cl.ok) return cl;
   let bands: Record<string, WavelengthBand> = { ...DEFAULT_BANDS };
-  let unit: string | undefined;
-  const files: string[] = [];
-  let optionsEnded = false;
-  for (let i = 0; i < args.length; i++) {
-    const arg = args[i];
-    if (optionsEnded || !arg.startsWith('--')) {
-      files.push(arg);
-      continue;
-    }
-    if (arg === '--') {
-      optionsEnded = true;
-      continue;
-    }
-    if (arg === '--help') return { ok: false, message: '', exitCode: 0 };
-    const eq = arg.indexOf('=');
-    const name = eq === -1 ? arg : arg.slice(0, eq);
-    if (name !== '--bands' && name !== '--unit') return { ok: false, message: `unknown option ${arg}`, exitCode: 2 };
-    const value = eq === -1 ? args[++i] : arg.slice(eq + 1);
-    if (value === undefined) return { ok: false, message: `${name} needs a value`, exitCode: 2 };
-    if (name === '--unit') {
-      if (parseSpectralUnit(value) === null) {
-        return { ok: false, message: `unknown unit "${value}"; use a spectral irradiance unit such as ${KNOWN_UNITS_HINT}`, exitCode: 2 };
-      }
-      unit = value;
-    } else {
-      const parsed = parseBandList(value);
-      if (!parsed.ok) return { ok: false, message: `--bands: ${parsed.message}`, exitCode: 2 };
-      bands = parsed.bands;
-    }
+  const { unit } = cl.values;
+  if (unit !== undefined && parseSpectralUnit(unit) === null) {
+    return { ok: false, message: `unknown unit "${unit}"; use a spectral irradiance unit such as ${KNOWN_UNITS_HINT}` };
   }
-  if (files.length === 0) return { ok: false, message: 'no file given', exitCode: 2 };
-  return { ok: true, options: { bands, unit, files } };
+  if (cl.values.bands !== undefined) {
+    const parsed = parseBandList(cl.values.bands);
+    if (!parsed.ok) return { ok: false, message: `--bands: ${parsed.message}` };
+    bands = parsed.bands;
+  }
+  if (!cl.help && cl.files.length === 0) return { ok: false, message: 'no file given' };
+  return { ok: true, help: cl.help, options: { bands, unit, files: cl.files } };
 }
 
 function failed(file: string, issues: ImportIssue[], unit: string | null = null): FileReport {
   return { file, ok: false, unit, samples: 0, rangeNm: null, bands: null, totalWm2: null, peakNm: null, photonFluxUmolM2S: null, issues };
 }
 
-async function readBytes(file: string): Promise<Uint8Array | ImportIssue> {
-  try {
-    const info = await stat(file);
-    if (!info.isFile()) return { line: null, code: 'file_unreadable', severity: 'error', message: `${file} is not a file.` };
-    if (info.size > MAX_FILE_BYTES) {
-      return { line: null, code: 'file_too_large', severity: 'error', message: `${file} is larger than ${MAX_FILE_BYTES / 1024 / 1024} MB; it is not a single spectrum.` };
-    }
-    return await readFile(file);
-  } catch (err) {
-    const reason = (err as NodeJS.ErrnoException).code === 'ENOENT' ? 'does not exist' : 'cannot be read';
-    return { line: null, code: 'file_unreadable', severity: 'error', message: `${file} ${reason}.` };
-  }
-}
-
 async function reportFile(file: string, options: Options): Promise<FileReport> {
-  const bytes = await readBytes(file);
-  if (!(bytes instanceof Uint8Array)) return failed(file, [bytes]);
-  const decoded = decodeTextBytes(bytes);
+  const read = await readInputFile(file, 'a single spectrum');
+  if ('problem' in read) return failed(file, [{ line: null, code: read.code, severity: 'error', message: read.problem }]);
+  const decoded = decodeTextBytes(read.bytes);
   const result = importSpectrum(decoded.text, { unit: options.unit });
   const issues = [...decoded.issues, ...result.issues];
   if (!result.ok || result.spectrum === null) return failed(file, issues, result.unit);
   const summary = summariseSpectrum(result.spectrum, options.bands);
   const bands: FileReport['bands'] = {};
-  for (const [name, b] of Object.entries(summary.bands)) bands[name] = { loNm: b.loNm, hiNm: b.hiNm, wm2: b.wm2, partial: b.partial };
+  for (const [name, b] of Object.entries(summary.bands)) bands[name] = { loNm: b.loNm, hiNm: b.hiNm, wm2: tidy(b.wm2), partial: b.partial };
   return {
     file,
     ok: true,
@@ -116,22 +80,22 @@ async function reportFile(file: string, options: Options): Promise<FileReport> {
     samples: summary.samples,
     rangeNm: summary.rangeNm,
     bands,
-    totalWm2: summary.totalWm2,
-    peakNm: summary.peakNm,
-    photonFluxUmolM2S: summary.photonFluxUmolM2S,
+    totalWm2: tidy(summary.totalWm2),
+    peakNm: tidy(summary.peakNm),
+    photonFluxUmolM2S: tidy(summary.photonFluxUmolM2S),
     issues,
   };
 }
 
 export async function runSpectrumCommand(args: string[]): Promise<number> {
-  const parsed = parseArgs(args);
+  const parsed = parseOptions(args);
   if (!parsed.ok) {
-    if (parsed.exitCode === 0) {
-      process.stdout.write(SPECTRUM_USAGE);
-      return 0;
-    }
     process.stderr.write(`analyze spectrum: ${parsed.message}\n${SPECTRUM_USAGE}`);
-    return parsed.exitCode;
+    return 2;
+  }
+  if (parsed.help) {
+    process.stdout.write(SPECTRUM_USAGE);
+    return 0;
   }
   const files: FileReport[] = [];
   for (const file of parsed.options.files) files.push(await reportFile(file, parsed.options));

@@ -3,7 +3,7 @@ import type pg from 'pg';
 
 /**
  * Counts failed sign-ins per account and per client IP in PostgreSQL (shared by every web
- * process). After `maxFailures` failures within the window, further attempts are refused.
+ * process). After the allowed failures within the window, further attempts are refused.
  */
 export interface SignInLimiter {
   /** Seconds until the caller may try again, or 0 when allowed. */
@@ -12,8 +12,12 @@ export interface SignInLimiter {
   recordSuccess(email: string): Promise<void>;
 }
 
-export function createSignInLimiter(pool: pg.Pool, maxFailures: number, windowMinutes: number): SignInLimiter {
-  const make = (keyPrefix: string) =>
+export function createSignInLimiter(
+  pool: pg.Pool,
+  limits: { perAccount: number; perIp: number; windowMinutes: number },
+): SignInLimiter {
+  const { windowMinutes } = limits;
+  const make = (keyPrefix: string, maxFailures: number) =>
     new RateLimiterPostgres({
       storeClient: pool,
       tableName: 'sign_in_limits',
@@ -23,13 +27,13 @@ export function createSignInLimiter(pool: pg.Pool, maxFailures: number, windowMi
       points: maxFailures,
       duration: windowMinutes * 60,
     });
-  const byIp = make('signin-ip');
-  const byAccount = make('signin-account');
+  const byIp = make('signin-ip', limits.perIp);
+  const byAccount = make('signin-account', limits.perAccount);
   const accountKey = (email: string) => email.trim().toLowerCase();
 
   const wait = async (limiter: RateLimiterPostgres, key: string) => {
     const res = await limiter.get(key);
-    if (!res || res.consumedPoints < maxFailures) return 0;
+    if (!res || res.consumedPoints < limiter.points) return 0;
     return Math.max(1, Math.ceil(res.msBeforeNext / 1000));
   };
 

@@ -1,17 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { centerAtDistance, falloffExponent, localFalloffExponents } from './falloff.ts';
+import { cornerViewFactor } from '../geometry/view-factor.ts';
 
-// Howell's catalogue case B-3 (Siegel & Howell, Thermal Radiation Heat Transfer): configuration
-// factor from a small plane receiver to a parallel rectangle a×b, receiver normal through a corner.
-function cornerFactor(a: number, b: number, c: number): number {
-  const X = a / c;
-  const Y = b / c;
-  const sx = Math.sqrt(1 + X * X);
-  const sy = Math.sqrt(1 + Y * Y);
-  return (X / sx * Math.atan(Y / sx) + Y / sy * Math.atan(X / sy)) / (2 * Math.PI);
-}
+// Howell's catalogue case B-3 (Siegel & Howell, Thermal Radiation Heat Transfer), checked
+// against its own published values in view-factor.test.ts.
 // Centre of an a×b rectangle: four corners of (a/2)×(b/2).
-const centreFactor = (a: number, b: number, c: number) => 4 * cornerFactor(a / 2, b / 2, c);
+const centreFactor = (a: number, b: number, c: number) => 4 * cornerViewFactor(a / 2, b / 2, c);
 
 describe('falloffExponent', () => {
   it('is exactly 2 for a point source', () => {

@@ -6,15 +6,10 @@ import {
   ledArrayIrradianceAt,
   ledPositionsCm,
 } from './led-array.ts';
+import { cornerViewFactor } from './view-factor.ts';
 
 // Howell's catalogue case B-3 (Siegel & Howell, Thermal Radiation Heat Transfer).
-function cornerFactor(a: number, b: number, c: number): number {
-  const X = a / c;
-  const Y = b / c;
-  const sx = Math.sqrt(1 + X * X);
-  const sy = Math.sqrt(1 + Y * Y);
-  return (X / sx * Math.atan(Y / sx) + Y / sy * Math.atan(X / sy)) / (2 * Math.PI);
-}
+const cornerFactor = cornerViewFactor;
 
 /** Local exponent −d ln E / d ln d by a central difference (computed). */
 function localExponent(e: (d: number) => number, d: number): number {

@@ -1,0 +1,49 @@
+/** What both bench CLI commands share: option parsing, reading a file, tidy numbers. */
+import { readFile, stat } from 'node:fs/promises';
+import { parseArgs } from 'node:util';
+
+/** Larger files are neither a spectrum nor a bench grid. */
+export const MAX_FILE_BYTES = 64 * 1024 * 1024;
+
+export type ParsedCommandLine<K extends string> =
+  | { ok: true; values: Partial<Record<K, string>>; files: string[]; help: boolean }
+  | { ok: false; message: string };
+
+/**
+ * `--name value` and `--name=value` for string options, `--help`, `--` and positional files,
+ * through node's own parser (strict: an unknown option is an error).
+ */
+export function parseCommandLine<K extends string>(args: string[], optionNames: readonly K[]): ParsedCommandLine<K> {
+  const options: Record<string, { type: 'string' | 'boolean' }> = { help: { type: 'boolean' } };
+  for (const name of optionNames) options[name] = { type: 'string' };
+  try {
+    const { values, positionals } = parseArgs({ args, options, allowPositionals: true, strict: true });
+    const { help, ...rest } = values as Record<string, string | boolean | undefined>;
+    return { ok: true, values: rest as Partial<Record<K, string>>, files: positionals, help: help === true };
+  } catch (err) {
+    // node's messages name the option, e.g. "Unknown option '--colour'".
+    return { ok: false, message: err instanceof Error ? err.message.split('\n')[0] : String(err) };
+  }
+}
+
+/** The file's bytes, or a sentence saying why they cannot be had. */
+export async function readInputFile(file: string, whatItIsNot: string): Promise<{ bytes: Uint8Array } | { problem: string; code: string }> {
+  try {
+    const info = await stat(file);
+    if (!info.isFile()) return { code: 'file_unreadable', problem: `${file} is not a file.` };
+    if (info.size > MAX_FILE_BYTES) {
+      return { code: 'file_too_large', problem: `${file} is larger than ${MAX_FILE_BYTES / 1024 / 1024} MB; it is not ${whatItIsNot}.` };
+    }
+    return { bytes: await readFile(file) };
+  } catch (err) {
+    const reason = (err as NodeJS.ErrnoException).code === 'ENOENT' ? 'does not exist' : 'cannot be read';
+    return { code: 'file_unreadable', problem: `${file} ${reason}.` };
+  }
+}
+
+/** Rounds away float noise (10 significant digits) so the JSON reads cleanly. */
+export function tidy(v: number): number;
+export function tidy(v: number | null): number | null;
+export function tidy(v: number | null): number | null {
+  return v === null || !Number.isFinite(v) ? null : Number(v.toPrecision(10));
+}
