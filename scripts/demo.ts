@@ -1,6 +1,7 @@
 /**
  * npm run demo: the whole app with demo data on this machine. Starts the project's
- * PostgreSQL (unless DATABASE_URL is set), migrates, seeds the demo, builds the client and
+ * PostgreSQL (unless DATABASE_URL is set), migrates, seeds the demo accounts, writes the demo
+ * instrument exports to demo-data/, builds the client and
  * runs the server, which serves both the API and the pages. Ctrl-C stops the server;
  * `npm run db:stop` stops PostgreSQL.
  */
@@ -20,6 +21,9 @@ async function main() {
   const databaseUrl = resolveDatabaseUrl();
   knexCli('Migrate', ['migrate:latest'], databaseUrl);
   knexCli('Seed the demo data', ['seed:run'], databaseUrl);
+  runStep('Write the demo exports to demo-data/ (try them with the bench CLI)', process.execPath, [
+    '--import', 'tsx', path.join(ROOT, 'scripts', 'make-demo-data.ts'), '--out', path.join(ROOT, 'demo-data'),
+  ]);
   runStep('Build the web client', process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn']);
 
   console.log('\nDemo accounts:');
