@@ -32,7 +32,8 @@ async function main() {
   const server = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'main.ts')], {
     cwd: ROOT,
     stdio: 'inherit',
-    env: { ...process.env, SERVE_CLIENT: 'true', DATABASE_URL: databaseUrl },
+    // Request logs stay quiet in the demo unless LOG_LEVEL asks for them.
+    env: { ...process.env, SERVE_CLIENT: 'true', DATABASE_URL: databaseUrl, LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn' },
   });
   const forward = (signal: NodeJS.Signals) => server.kill(signal);
   process.on('SIGINT', forward);
