@@ -3,9 +3,20 @@
  * sure Chromium is there for the browser tests, builds the client the browser tests load,
  * then runs all four vitest projects: shared, server, client, browser.
  */
+import fs from 'node:fs';
+import path from 'node:path';
 import { start } from '../server/db/embedded-postgres.ts';
 import { ensureChromium } from './lib/chromium.ts';
-import { runStep } from './lib/run-step.ts';
+import { ROOT, runStep } from './lib/run-step.ts';
+
+const RESULTS = path.join(ROOT, '.tmp', 'vitest-results.json');
+
+/** One closing line in the plain "N passed, N failed, N skipped" form, from vitest's JSON report. */
+function printTotals(): void {
+  if (!fs.existsSync(RESULTS)) return;
+  const r = JSON.parse(fs.readFileSync(RESULTS, 'utf8')) as { numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number };
+  console.log(`\nTests: ${r.numPassedTests} passed, ${r.numFailedTests} failed, ${r.numPendingTests + r.numTodoTests} skipped`);
+}
 
 async function main() {
   if (!process.env.DATABASE_URL) {
@@ -14,7 +25,15 @@ async function main() {
   }
   ensureChromium();
   runStep('Build the client for the browser tests', process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn']);
-  runStep('Tests: shared, server, client, browser', process.execPath, ['node_modules/vitest/vitest.mjs', 'run', ...process.argv.slice(2)]);
+  fs.rmSync(RESULTS, { force: true });
+  try {
+    runStep('Tests: shared, server, client, browser', process.execPath, [
+      'node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${RESULTS}`,
+      ...process.argv.slice(2),
+    ]);
+  } finally {
+    printTotals();
+  }
 }
 
 main().catch((err: unknown) => {

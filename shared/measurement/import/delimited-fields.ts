@@ -1,4 +1,7 @@
-/** Delimiter detection and field splitting for header and preamble lines (not the hot loop). */
+/**
+ * Delimiter detection and field splitting for header detection, plus cell tests. The rows under
+ * the header are split by csv-parse (table-records.ts).
+ */
 export type Delimiter = ',' | ';' | '\t' | ' ';
 
 /** Tab, then semicolon, then comma, counted outside double quotes; whitespace as the last resort. */

@@ -8,6 +8,7 @@
  * negative distance, repeated grid point) is dropped and reported as a warning with its line;
  * the file is rejected (error) when it has no usable row, when most of its rows are bad, or when
  * a column is missing. Never throws on bad data.
+ * Our code finds the header and reads the cells; csv-parse splits the rows (table-records.ts).
  */
 import { issue, type ImportIssue } from './import-issue.ts';
 import { ProblemList } from './problem-list.ts';
@@ -21,6 +22,7 @@ import {
   type Delimiter,
 } from './delimited-fields.ts';
 import { parseDecimalCell } from './parse-decimal.ts';
+import { isEmptyRecord, readTableRecords } from './table-records.ts';
 
 export interface MeterReading {
   distanceCm: number;
@@ -109,18 +111,18 @@ export function importMeterReadings(text: string): MeterReadingsImport {
   let dataRows = 0;
   let badRows = 0;
 
-  for (let i = header.lineIndex + 1; i < lines.length; i++) {
-    const raw = lines[i];
-    if (isBlankLine(raw) || raw.trimStart().startsWith('#')) continue;
-    const line = i + 1;
+  const table = readTableRecords(split, header.lineIndex + 1, header.delimiter);
+  for (let k = 0; k < table.records.length; k++) {
+    const cells = table.records[k];
+    if (isEmptyRecord(cells)) continue;
+    const line = table.lines[k];
     dataRows++;
-    const cells = splitFields(raw, header.delimiter);
     const values: number[] = [];
     let problem: 'missing_value' | 'formula_cell' | 'non_numeric_row' | null = null;
     let problemColumn: Column = 'distance_cm';
     for (const column of COLUMNS) {
       const cell = cells[header.columnIndex.get(column)!] ?? '';
-      // A comma left inside a split cell is either quoted or under a `;`/tab delimiter: a decimal comma.
+      // A comma inside a cell was quoted or is not the delimiter, so it can only be a decimal comma.
       const value = parseDecimalCell(cell, true);
       if (Number.isNaN(value)) {
         problem = isMissingCell(cell) ? 'missing_value' : looksLikeFormula(cell) ? 'formula_cell' : 'non_numeric_row';

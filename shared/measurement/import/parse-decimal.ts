@@ -1,5 +1,5 @@
 /**
- * Reads one number from a slice of a line without allocating, for the importers' hot loop.
+ * Reads one number from a cell without allocating, for the importers' hot loop.
  * Accepts `12`, `-0.5`, `.5`, `1.`, `1.2E-03`, and with `decimalComma` also `0,5` / `1,2E-03`.
  * Surrounding spaces and one pair of double quotes are ignored. Anything else gives NaN
  * (including `NaN`, `Infinity`, hex, thousands separators and empty cells).
@@ -17,7 +17,7 @@ function isBlank(code: number): boolean {
   return code === 32 || code === 9 || code === 0xa0;
 }
 
-export function parseDecimal(s: string, start: number, end: number, decimalComma: boolean): number {
+function parseDecimal(s: string, start: number, end: number, decimalComma: boolean): number {
   while (start < end && isBlank(s.charCodeAt(start))) start++;
   while (end > start && isBlank(s.charCodeAt(end - 1))) end--;
   if (end - start >= 2 && s.charCodeAt(start) === 34 && s.charCodeAt(end - 1) === 34) {
@@ -95,7 +95,6 @@ export function parseDecimal(s: string, start: number, end: number, decimalComma
   return Number.isFinite(value) ? value : NaN;
 }
 
-/** Convenience for a whole cell. */
 export function parseDecimalCell(cell: string, decimalComma: boolean): number {
   return parseDecimal(cell, 0, cell.length, decimalComma);
 }

@@ -14,11 +14,15 @@
  * Unit precedence: the caller's unit, then the irradiance column's header (or the unit line under
  * it), then a `Units: …` line in the preamble. Disagreements are reported as warnings.
  * Negative irradiance values (noise around zero) are kept: integration is signed.
+ *
+ * Our code finds the table (preamble, header, delimiter) and reads the cells; csv-parse splits
+ * the rows (table-records.ts).
  */
 import type { ImportIssue } from './import-issue.ts';
 import { ProblemList } from './problem-list.ts';
 import { splitTextLines } from './text-lines.ts';
 import { isBlankLine } from './delimited-fields.ts';
+import { readTableRecords } from './table-records.ts';
 import { parseMetadataLine } from './metadata-line.ts';
 import { locateTable, type TableLocation } from './locate-table.ts';
 import { chooseIrradianceColumn, wavelengthScaleToNm } from './spectrum-columns.ts';
@@ -110,15 +114,14 @@ export function importSpectrum(text: string, options: SpectrumImportOptions = {}
 
   const unit = resolveUnit(callerUnit, columnUnit, preambleUnit, columnName, issues);
   const wavelengthHeader = table.header?.[table.wavelengthIndex] ?? '';
+  const records = readTableRecords(split, table.dataStart, table.delimiter);
   const samples = readSpectrumRows(
+    records,
     lines,
-    table.dataStart,
     {
-      delimiter: table.delimiter,
       wavelengthIndex: table.wavelengthIndex,
       irradianceIndex,
       headerWidth: table.headerWidth,
-      decimalComma: table.delimiter !== ',',
       wavelengthScaleToNm: wavelengthScaleToNm(wavelengthHeader),
     },
     issues,

@@ -1,19 +1,18 @@
 /**
- * The hot loop of the spectrum importer: reads the wavelength and irradiance cells of every data
- * line without building per-cell strings or running regexes (a quoted or space-separated line
- * takes the slower general path). Bad rows are counted and reported; nothing is thrown.
+ * The hot loop of the spectrum importer: reads the wavelength and irradiance cells of every record
+ * csv-parse gave (see table-records.ts). Bad rows are counted and reported with their line;
+ * nothing is thrown.
  */
 import { ProblemList } from './problem-list.ts';
-import { isBlankLine, isMissingCell, looksLikeFormula, splitFields, type Delimiter } from './delimited-fields.ts';
-import { parseDecimal, parseDecimalCell } from './parse-decimal.ts';
+import { isMissingCell, looksLikeFormula } from './delimited-fields.ts';
+import { parseDecimalCell } from './parse-decimal.ts';
+import { isEmptyRecord, type TableRecords } from './table-records.ts';
 
 export interface RowLayout {
-  delimiter: Delimiter;
   wavelengthIndex: number;
   irradianceIndex: number;
   /** Columns named by the header; later non-empty cells are "extra values". */
   headerWidth: number;
-  decimalComma: boolean;
   /** Multiplies the wavelength cell to give nm (1 for nm, 1000 for µm, 0.1 for Å). */
   wavelengthScaleToNm: number;
 }
@@ -38,16 +37,18 @@ export interface RawSamples {
 export const MIN_WAVELENGTH_NM = 200;
 export const MAX_WAVELENGTH_NM = 2500;
 
-export function readSpectrumRows(lines: readonly string[], from: number, layout: RowLayout, issues: ProblemList): RawSamples {
-  const capacity = Math.max(0, lines.length - from);
+/** `lines`: the file's lines, to quote a bad row in its message. */
+export function readSpectrumRows(table: TableRecords, lines: readonly string[], layout: RowLayout, issues: ProblemList): RawSamples {
+  const { records, lines: lineOf } = table;
+  const capacity = records.length;
   const wavelengthNm = new Float64Array(capacity);
   const irradiance = new Float64Array(capacity);
-  const lineOf = new Int32Array(capacity);
-  const { delimiter, wavelengthIndex, irradianceIndex, headerWidth, decimalComma, wavelengthScaleToNm } = layout;
+  const sampleLine = new Int32Array(capacity);
+  const { wavelengthIndex, irradianceIndex, headerWidth, wavelengthScaleToNm } = layout;
   const out: RawSamples = {
     wavelengthNm,
     irradiance,
-    line: lineOf,
+    line: sampleLine,
     count: 0,
     dataRows: 0,
     numericRows: 0,
@@ -58,76 +59,49 @@ export function readSpectrumRows(lines: readonly string[], from: number, layout:
     maxSeenNm: -Infinity,
   };
 
-  for (let i = from; i < lines.length; i++) {
-    const text = lines[i];
-    if (text.length === 0) continue;
-    let wl = NaN;
-    let e = NaN;
-    let fields = 0;
-    let extra = false;
-
-    if (delimiter !== ' ' && text.indexOf('"') === -1) {
-      let start = 0;
-      for (;;) {
-        let end = text.indexOf(delimiter, start);
-        if (end === -1) end = text.length;
-        if (fields === wavelengthIndex) wl = parseDecimal(text, start, end, decimalComma);
-        else if (fields === irradianceIndex) e = parseDecimal(text, start, end, decimalComma);
-        else if (fields >= headerWidth && !extra) extra = !isBlankSlice(text, start, end);
-        fields++;
-        if (end === text.length) break;
-        start = end + 1;
-      }
-    } else {
-      // A comma left inside a split cell was quoted, so it can only be a decimal comma.
-      const cells = splitFields(text, delimiter);
-      fields = cells.length;
-      wl = parseDecimalCell(cells[wavelengthIndex] ?? '', true);
-      e = parseDecimalCell(cells[irradianceIndex] ?? '', true);
-      for (let k = headerWidth; k < cells.length && !extra; k++) extra = cells[k] !== '';
-    }
-
+  for (let k = 0; k < records.length; k++) {
+    const cells = records[k];
+    const line = lineOf[k];
+    // A comma inside a cell was quoted or is not the delimiter, so it can only be a decimal comma.
+    let wl = parseDecimalCell(cells[wavelengthIndex] ?? '', true);
+    const e = parseDecimalCell(cells[irradianceIndex] ?? '', true);
     if (Number.isNaN(wl) || Number.isNaN(e)) {
-      if (isBlankLine(text) || text.trimStart().charCodeAt(0) === 35 /* # */) continue;
+      if (isEmptyRecord(cells)) continue;
       out.dataRows++;
       out.badRows++;
-      reportBadRow(text, i + 1, layout, issues);
+      reportBadRow(cells, lines[line - 1] ?? '', line, layout, issues);
       continue;
     }
     out.dataRows++;
     out.numericRows++;
-    if (extra) out.rowsWithExtraValues++;
+    for (let c = headerWidth; c < cells.length; c++) {
+      if (cells[c].trim() !== '') {
+        out.rowsWithExtraValues++;
+        break;
+      }
+    }
     wl *= wavelengthScaleToNm;
     if (wl < out.minSeenNm) out.minSeenNm = wl;
     if (wl > out.maxSeenNm) out.maxSeenNm = wl;
     if (!(wl >= MIN_WAVELENGTH_NM && wl <= MAX_WAVELENGTH_NM)) {
       out.outOfRangeRows++;
       issues.add(
-        i + 1,
+        line,
         'wavelength_out_of_range',
         'warning',
-        `Line ${i + 1}: wavelength ${wl} nm is outside ${MIN_WAVELENGTH_NM}–${MAX_WAVELENGTH_NM} nm; the row was left out.`,
+        `Line ${line}: wavelength ${wl} nm is outside ${MIN_WAVELENGTH_NM}–${MAX_WAVELENGTH_NM} nm; the row was left out.`,
       );
       continue;
     }
     wavelengthNm[out.count] = wl;
     irradiance[out.count] = e;
-    lineOf[out.count] = i + 1;
+    sampleLine[out.count] = line;
     out.count++;
   }
   return out;
 }
 
-function isBlankSlice(text: string, start: number, end: number): boolean {
-  for (let k = start; k < end; k++) {
-    const c = text.charCodeAt(k);
-    if (c !== 32 && c !== 9 && c !== 34) return false;
-  }
-  return true;
-}
-
-function reportBadRow(text: string, line: number, layout: RowLayout, issues: ProblemList): void {
-  const cells = splitFields(text, layout.delimiter);
+function reportBadRow(cells: readonly string[], text: string, line: number, layout: RowLayout, issues: ProblemList): void {
   const wlCell = cells[layout.wavelengthIndex] ?? '';
   const eCell = cells[layout.irradianceIndex] ?? '';
   const isText = (cell: string) => cell.trim() !== '' && !isMissingCell(cell) && Number.isNaN(parseDecimalCell(cell, true));

@@ -2,9 +2,18 @@ import { issue, type ImportIssue } from './import-issue.ts';
 
 /**
  * First step of every importer: refuse what is not text, drop a UTF-8 byte-order mark and cut
- * the text into lines (LF, CRLF or old-style CR). Line i of the result is line i + 1 of the file.
+ * the text into lines (LF, CRLF or old-style CR). Line i of `lines` is line i + 1 of the file.
+ * The lines serve header detection, the preamble and issue messages; csv-parse splits the rows.
  */
-export type TextLinesResult = { lines: string[]; issue: null } | { lines: null; issue: ImportIssue };
+export interface TextLines {
+  /** The text without its byte-order mark. */
+  text: string;
+  lines: string[];
+  /** `\n` for LF and CRLF files, `\r` for files that have no LF at all. */
+  lineBreak: '\n' | '\r';
+}
+
+export type TextLinesResult = ({ issue: null } & TextLines) | { lines: null; issue: ImportIssue };
 
 const SAMPLE_CHARS = 8192;
 
@@ -16,12 +25,24 @@ export function splitTextLines(text: string): TextLinesResult {
   const problem = notTextProblem(text);
   if (problem) return { lines: null, issue: problem };
 
-  const lines = text.includes('\n') ? text.split('\n') : text.split('\r');
+  const lineBreak = text.includes('\n') ? '\n' : '\r';
+  const lines = text.split(lineBreak);
   for (let i = 0; i < lines.length; i++) {
     const line = lines[i];
     if (line.charCodeAt(line.length - 1) === 13) lines[i] = line.slice(0, -1);
   }
-  return { lines, issue: null };
+  return { text, lines, lineBreak, issue: null };
+}
+
+/** Character offset in `text` where line `index` (0-based) starts. */
+export function lineStart({ text, lineBreak }: TextLines, index: number): number {
+  let at = 0;
+  for (let i = 0; i < index; i++) {
+    const end = text.indexOf(lineBreak, at);
+    if (end === -1) return text.length;
+    at = end + 1;
+  }
+  return at;
 }
 
 /** UTF-16 read as UTF-8 shows a NUL beside every ASCII character; other binaries show control bytes. */
