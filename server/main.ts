@@ -11,7 +11,7 @@ import { createApp } from './app.ts';
 
 const config = loadConfig();
 const logger = createLogger(config.LOG_LEVEL);
-const db = createDb(resolveDatabaseUrl(process.env), (err) => logger.warn({ err: err.message }, 'database connection error'));
+const db = createDb(resolveDatabaseUrl({ DATABASE_URL: config.DATABASE_URL }), (err) => logger.warn({ err: err.message }, 'database connection error'));
 const mailer = createMailer({ smtpUrl: config.SMTP_URL, from: config.MAIL_FROM, logger });
 const app = createApp({ config, db, mailer, clock: { now: () => new Date() }, logger });
 
@@ -21,6 +21,15 @@ const server = app.listen(config.PORT, config.HOST, () => {
   const host = config.HOST === '0.0.0.0' ? '127.0.0.1' : config.HOST;
   logger.info({ port, host: config.HOST }, 'listening');
   console.log(`Benchlight is running at http://${host}:${port}/`);
+});
+
+server.on('error', (err: NodeJS.ErrnoException) => {
+  if (err.code === 'EADDRINUSE') {
+    console.error(`Port ${config.PORT} on ${config.HOST} is already in use. Stop the other program or set PORT=<port>.`);
+  } else {
+    console.error(`The web server could not start: ${err.message}`);
+  }
+  void closeDb(db).then(() => process.exit(1));
 });
 
 function shutdown(signal: string) {
