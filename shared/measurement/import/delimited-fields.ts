@@ -70,10 +70,15 @@ export function isMissingCell(cell: string): boolean {
   return t === '' || t === 'nan' || t === 'na' || t === 'n/a' || t === '-' || t === '--' || t === 'null';
 }
 
-/** Space-separated: `Wavelength (nm)` stays one field because a bracketed unit joins the word before it. */
+/**
+ * Space-separated: `Wavelength (nm)` stays one field because a bracketed unit joins the word before
+ * it. A line padded into aligned columns (runs of two or more spaces) is split on those runs only,
+ * so `Wavelength (nm)    Spectral Irradiance (W/m^2/nm)` gives two fields.
+ */
 function splitOnSpaces(line: string): string[] {
+  const text = line.trim();
   const fields: string[] = [];
-  for (const part of line.trim().split(/\s+/)) {
+  for (const part of text.split(/\s{2,}/.test(text) ? /\s{2,}/ : /\s+/)) {
     if (fields.length > 0 && /^[([]/.test(part)) fields[fields.length - 1] += ` ${part}`;
     else fields.push(part);
   }

@@ -10,7 +10,13 @@ const problems = (file: string) => read(file).issues.map((i) => [i.code, i.line,
 
 describe('importMeterReadings on the fixture corpus', () => {
   // Expected values are the numbers written into the fixtures by generate-meter-readings.ts.
-  it.each(['template-comma.csv', 'semicolon-decimal-comma-bom-crlf.csv', 'tab-blank-lines.tsv'])('%s: 8 readings', (file) => {
+  it.each([
+    'template-comma.csv',
+    'semicolon-decimal-comma-bom-crlf.csv',
+    'tab-blank-lines.tsv',
+    'header-caret-units.csv',
+    'header-exponent-units.csv',
+  ])('%s: 8 readings', (file) => {
     const r = read(file);
     expect(r.ok).toBe(true);
     expect(r.issues).toEqual([]);

@@ -41,11 +41,13 @@ export interface MeterReadingsImport {
 type Column = 'distance_cm' | 'x_cm' | 'y_cm' | 'irradiance_mw_cm2';
 const COLUMNS: readonly Column[] = ['distance_cm', 'x_cm', 'y_cm', 'irradiance_mw_cm2'];
 
-/** `Distance (cm)`, `"x_cm"`, `Irradiance (mW/cm²)` → template names. */
+/** `Distance (cm)`, `"x_cm"`, `Irradiance (mW/cm²)`, `Irradiance [mW/cm^2]`, `irradiance (mW cm-2)` → template names. */
 function normaliseHeaderName(cell: string): string {
   return cell
     .toLowerCase()
     .replace(/²/g, '2')
+    .replace(/\^|\*\*/g, '')
+    .replace(/cm[-\u207b\u2212]2/g, 'cm2')
     .replace(/[^a-z0-9]+/g, '_')
     .replace(/^_+|_+$/g, '');
 }

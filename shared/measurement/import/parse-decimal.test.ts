@@ -26,6 +26,12 @@ describe('parseDecimal', () => {
     expect(Number.isNaN(parseDecimalCell('0,0123', false))).toBe(true);
   });
 
+  it('reads the Unicode minus sign (U+2212, The Unicode Standard) as a minus, also in the exponent', () => {
+    expect(parseDecimalCell('\u22120.5', false)).toBe(-0.5);
+    expect(parseDecimalCell('\u22121,5E\u221203', true)).toBe(-0.0015);
+    expect(parseDecimalCell('\u22121.2345678901234567', false)).toBe(Number('-1.2345678901234567'));
+  });
+
   it('trims spaces and one pair of quotes', () => {
     expect(parseDecimalCell('  600.5 ', false)).toBe(600.5);
     expect(parseDecimalCell('"600.5"', false)).toBe(600.5);

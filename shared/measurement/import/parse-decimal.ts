@@ -1,6 +1,7 @@
 /**
  * Reads one number from a cell without allocating, for the importers' hot loop.
  * Accepts `12`, `-0.5`, `.5`, `1.`, `1.2E-03`, and with `decimalComma` also `0,5` / `1,2E-03`.
+ * A minus may be the Unicode minus sign U+2212 (`−0.5`, `1E−03`), as some locales format numbers.
  * Surrounding spaces and one pair of double quotes are ignored. Anything else gives NaN
  * (including `NaN`, `Infinity`, hex, thousands separators and empty cells).
  *
@@ -31,7 +32,7 @@ function parseDecimal(s: string, start: number, end: number, decimalComma: boole
   let i = start;
   let c = s.charCodeAt(i);
   let negative = false;
-  if (c === 45 /* - */) {
+  if (c === 45 /* - */ || c === 0x2212 /* − */) {
     negative = true;
     i++;
   } else if (c === 43 /* + */) {
@@ -66,7 +67,7 @@ function parseDecimal(s: string, start: number, end: number, decimalComma: boole
     i++;
     let expNegative = false;
     c = s.charCodeAt(i);
-    if (c === 45) {
+    if (c === 45 || c === 0x2212) {
       expNegative = true;
       i++;
     } else if (c === 43) {
@@ -89,7 +90,7 @@ function parseDecimal(s: string, start: number, end: number, decimalComma: boole
     const magnitude = scale < 0 ? mantissa / POW10[-scale] : mantissa * POW10[scale];
     return negative ? -magnitude : magnitude;
   }
-  let text = s.slice(start, end);
+  let text = s.slice(start, end).replace(/\u2212/g, '-');
   if (decimalComma) text = text.replace(',', '.');
   const value = Number(text);
   return Number.isFinite(value) ? value : NaN;

@@ -30,6 +30,8 @@ export interface IrradianceColumn {
   /** Unit named in the header cell or in the unit line, if any. */
   unit: UnitSpelling | null;
   name: string;
+  /** Other columns that looked just as likely (e.g. `Scan 1`, `Scan 2`); the first was chosen. */
+  equallyLikely: string[];
 }
 
 function score(name: string, unit: UnitSpelling | null): number {
@@ -42,10 +44,12 @@ function score(name: string, unit: UnitSpelling | null): number {
   if (/spectral|spectrum|spektral/.test(w)) points += 1;
   if (/^\s*(e|ee|el|elambda|eλ|e λ|e e)\b/.test(w)) points += 2;
   if (/\b(value|intensity|power|signal|data|y)\b/.test(w)) points += 1;
+  // Exports of repeated scans add the mean beside them: that is the result.
+  if (/\b(mean|average|avg|averaged)\b/.test(w)) points += 1;
   return points;
 }
 
-/** The best-scoring column; with just one column besides the wavelength, that one. */
+/** The best-scoring column (the first of equals); with just one column besides the wavelength, that one. */
 export function chooseIrradianceColumn(
   header: readonly string[],
   unitLine: readonly string[] | null,
@@ -60,19 +64,28 @@ export function chooseIrradianceColumn(
     const unitText = unitLine?.[index] ?? '';
     const unit = parseUnitSpelling(name) ?? (unitText ? parseUnitSpelling(unitText) : null);
     const points = score(`${name} ${unitText}`, unit);
-    if (points >= 0) others.push({ index, unit, name });
+    const column: IrradianceColumn = { index, unit, name, equallyLikely: [] };
+    if (points >= 0) others.push(column);
     if (points > bestScore) {
-      best = { index, unit, name };
+      best = column;
       bestScore = points;
+    } else if (best && points === bestScore) {
+      best.equallyLikely.push(name);
     }
   }
   if (best) return best;
   return others.length === 1 ? others[0] : null;
 }
 
-/** A line under the header that names units (`nm;W/m2/nm;counts`) rather than holding values. */
+/**
+ * A line under the header that names units (`nm;W/m2/nm;counts`) rather than holding values. It is
+ * a row of the same table (two cells or more) and names no wavelength column: a line such as
+ * `Wavelength (nm);Irradiance (W/m2/nm)` is the real header under a preamble line, not units.
+ */
 export function isUnitLine(cells: readonly string[], wavelengthIndex: number): boolean {
+  if (cells.length < 2) return false;
   const wl = (cells[wavelengthIndex] ?? '').trim().replace(/^[\[(]|[\])]$/g, '').toLowerCase();
   if (/^(nm|um|µm|μm|a|å|angstrom)$/.test(wl)) return true;
+  if (cells.some(isWavelengthName)) return false;
   return cells.some((c) => parseUnitSpelling(c) !== null) && !cells.some((c) => /^[\s"]*[-+]?\.?\d/.test(c));
 }

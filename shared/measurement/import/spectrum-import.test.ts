@@ -35,10 +35,34 @@ describe('importSpectrum', () => {
     expect(r.issues[0].message).toMatch(/--unit/);
   });
 
+  it('finds the unit on any preamble line, keeps reading metadata after it, and skips readings', () => {
+    const r = importSpectrum('Integrated irradiance: 24.1 W/m2\nUnits: uW/cm2/nm\nOperator: A\nWavelength,Value\n600,1\n601,1\n');
+    expect(r.unit).toBe('uW/cm2/nm');
+    expect(r.metadata).toMatchObject({ Units: 'uW/cm2/nm', Operator: 'A' });
+    expect(importSpectrum('Spectral irradiance in W/m2/nm\nWavelength,Value\n600,1\n601,1\n').unit).toBe('W/m2/nm');
+    expect(importSpectrum('Integrated irradiance: 24.1 W/m2\nWavelength,Value\n600,1\n601,1\n').issues[0].code).toBe('no_unit');
+  });
+
   it('prefers the header unit to the preamble unit and warns', () => {
     const r = importSpectrum('Units: uW/cm2/nm\nWavelength,Irradiance (W/m2/nm)\n600,1\n601,1\n');
     expect(r.unit).toBe('W/m2/nm');
     expect(r.issues.map((i) => i.code)).toEqual(['unit_conflict']);
+  });
+
+  it('says a radiance column is radiance, not merely "not per nanometre"', () => {
+    const r = importSpectrum('Wavelength (nm),Radiance (W/m2/sr/nm)\n600,1\n601,1\n');
+    expect(r.issues.map((i) => i.code)).toEqual(['unit_not_spectral']);
+    expect(r.issues[0].message).toMatch(/steradian/);
+  });
+
+  it('takes a header written as a comment only when the rows have as many columns', () => {
+    const commented = importSpectrum('# pixel wavelength_nm irradiance_W_m2_nm\n0 600 1\n1 601 2\n');
+    expect(Array.from(commented.spectrum!.wavelengthNm)).toEqual([600, 601]);
+    const note = importSpectrum('Units: W/m2/nm\n# Wavelength calibration factory\n600 1\n601 2\n');
+    expect(note.issues.map((i) => i.code)).toEqual(['no_header']);
+    const under = importSpectrum('Wavelength (nm),Irradiance (W/m2/nm)\n# Wavelength calibration, factory\n600,1\n601,2\n');
+    expect(under.ok).toBe(true);
+    expect(under.issues).toEqual([]);
   });
 
   it('picks the named irradiance column among counts and reference columns', () => {

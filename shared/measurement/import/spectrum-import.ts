@@ -5,14 +5,16 @@
  * Policy for problems on a line. A bad row — not numeric, an empty/NaN cell, a spreadsheet formula, a
  * wavelength outside 200–2500 nm, a repeated wavelength (the later line) — is DROPPED and reported
  * as a warning with its line; the rest of the file is used. The file is REJECTED (an error, ok=false)
- * when: it is empty, not text (binary, UTF-16 read as UTF-8) or not a delimited table; it has a
- * header but no rows; most of its rows are bad; no wavelength lies in 200–2500 nm (likely µm or Å);
+ * when: it is empty, not text (binary, UTF-16 read as UTF-8) or not a delimited table (or lays the
+ * wavelengths across a row); it has a header but no rows; most of its rows are bad; no wavelength
+ * lies in 200–2500 nm (likely µm or Å);
  * fewer than 2 samples remain; no irradiance column can be told apart; or no unit is known
  * (none in the header, the unit line or the preamble, and none given by the caller).
  * At most 20 located problems per code are listed; one closing warning counts the rest.
  *
  * Unit precedence: the caller's unit, then the irradiance column's header (or the unit line under
- * it), then a `Units: …` line in the preamble. Disagreements are reported as warnings.
+ * it), then the preamble (a `Units: …` line, else any line naming a spectral unit). Disagreements
+ * are reported as warnings.
  * Negative irradiance values (noise around zero) are kept: integration is signed.
  *
  * Our code finds the table (preamble, header, delimiter) and reads the cells; csv-parse splits
@@ -24,7 +26,7 @@ import { splitTextLines } from './text-lines.ts';
 import { isBlankLine } from './delimited-fields.ts';
 import { readTableRecords } from './table-records.ts';
 import { parseMetadataLine } from './metadata-line.ts';
-import { locateTable, type TableLocation } from './locate-table.ts';
+import { findWavelengthRow, locateTable, type TableLocation } from './locate-table.ts';
 import { chooseIrradianceColumn, wavelengthScaleToNm } from './spectrum-columns.ts';
 import { readSpectrumRows, MAX_WAVELENGTH_NM, MIN_WAVELENGTH_NM, type RawSamples } from './spectrum-rows.ts';
 import { orderSamples } from './order-samples.ts';
@@ -75,6 +77,16 @@ export function importSpectrum(text: string, options: SpectrumImportOptions = {}
   }
 
   const table = locateTable(lines);
+  const wavelengthRow = table === null ? findWavelengthRow(lines) : null;
+  if (wavelengthRow !== null) {
+    issues.add(
+      wavelengthRow + 1,
+      'wavelengths_in_a_row',
+      'error',
+      `Line ${wavelengthRow + 1} holds the wavelengths across a row. Export (or transpose) the spectrum with wavelength and irradiance as columns, one sample per line.`,
+    );
+    return rejected(issues.finish());
+  }
   if (table === null) {
     issues.add(
       null,
@@ -110,6 +122,15 @@ export function importSpectrum(text: string, options: SpectrumImportOptions = {}
     irradianceIndex = column.index;
     columnUnit = column.unit;
     columnName = `"${column.name}"`;
+    if (column.equallyLikely.length > 0) {
+      const others = column.equallyLikely.map((name) => `"${name}"`).join(', ');
+      issues.add(
+        table.headerIndex! + 1,
+        'ambiguous_irradiance_column',
+        'warning',
+        `${others} could also be the spectral irradiance; ${columnName}, the first such column, was used.`,
+      );
+    }
   }
 
   const unit = resolveUnit(callerUnit, columnUnit, preambleUnit, columnName, issues);
@@ -151,17 +172,35 @@ export function importSpectrum(text: string, options: SpectrumImportOptions = {}
   };
 }
 
-/** Fills `metadata` from the preamble and returns the unit a `Units: …` line names, if any. */
+const UNIT_KEY = /unit|einheit|axis|quantity|irradiance|^y$/i;
+/** A value that starts with a number is a reading (`Integrated irradiance: 24.1 W/m2`), not a unit. */
+const READING = /^[-+]?\.?\d/;
+
+/**
+ * Fills `metadata` from the preamble and returns the unit it names: a spectral unit on a
+ * `Units: …` line first, else a spectral unit mentioned on any other line (`Data type: Spectral
+ * irradiance (W/m2/nm)`, `Spectral irradiance in W/m2/nm`), else the non-spectral unit of a
+ * `Units: …` line (reported as such). Readings such as `Integrated irradiance: 24.1 W/m2` name no unit.
+ */
 function readPreamble(lines: readonly string[], end: number, metadata: Record<string, string>): UnitSpelling | null {
-  let unit: UnitSpelling | null = null;
+  let keyed: UnitSpelling | null = null;
+  let mentioned: UnitSpelling | null = null;
+  let notSpectral: UnitSpelling | null = null;
   for (let i = 0; i < end; i++) {
     if (isBlankLine(lines[i])) continue;
     const entry = parseMetadataLine(lines[i]);
-    if (entry === null) continue;
-    if (!(entry.key in metadata)) metadata[entry.key] = entry.value;
-    if (unit === null && /unit|einheit|axis|quantity|irradiance|^y$/i.test(entry.key)) unit = parseUnitSpelling(entry.value);
+    if (entry !== null && !(entry.key in metadata)) metadata[entry.key] = entry.value;
+    if (entry !== null && READING.test(entry.value)) continue;
+    if (entry !== null && UNIT_KEY.test(entry.key)) {
+      const unit = parseUnitSpelling(entry.value);
+      if (unit?.kind === 'spectral') keyed ??= unit;
+      else notSpectral ??= unit;
+    } else {
+      const unit = parseUnitSpelling(lines[i]);
+      if (unit?.kind === 'spectral') mentioned ??= unit;
+    }
   }
-  return unit;
+  return keyed ?? mentioned ?? notSpectral;
 }
 
 function resolveUnit(
@@ -197,11 +236,12 @@ function resolveUnit(
     return null;
   }
   if (fileUnit.kind === 'not_spectral') {
+    const why = fileUnit.spelling.includes('/sr') ? 'per steradian, i.e. radiance' : 'not per nanometre';
     issues.add(
       null,
       'unit_not_spectral',
       'error',
-      `The irradiance column is in ${fileUnit.spelling}, which is not per nanometre: a spectrum needs spectral irradiance such as ${KNOWN_UNITS_HINT}. Give the right unit with --unit if the label is wrong.`,
+      `The irradiance column is in ${fileUnit.spelling}, which is ${why}: a spectrum needs spectral irradiance such as ${KNOWN_UNITS_HINT}. Give the right unit with --unit if the label is wrong.`,
     );
     return null;
   }

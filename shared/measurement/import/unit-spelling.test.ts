@@ -46,6 +46,13 @@ describe('parseUnitSpelling', () => {
     expect(parseUnitSpelling('Irradiance (mW/cm2)')).toEqual({ kind: 'not_spectral', spelling: 'mW/cm2' });
   });
 
+  it('tells spectral radiance (per steradian) from spectral irradiance', () => {
+    // Radiance is per steradian (ISO 80000-7, CIE International Lighting Vocabulary)
+    expect(parseUnitSpelling('Radiance (W/(m²·sr·nm))')).toEqual({ kind: 'not_spectral', spelling: 'W/m2/sr/nm' });
+    expect(parseUnitSpelling('W m-2 sr-1 nm-1')).toEqual({ kind: 'not_spectral', spelling: 'W/m2/sr/nm' });
+    expect(parseUnitSpelling('W sr-1 m-2')).toEqual({ kind: 'not_spectral', spelling: 'W/m2/sr' });
+  });
+
   it('finds nothing in names without a unit', () => {
     for (const text of ['Wavelength (nm)', 'counts', 'Irradiance', 'a.u.', '']) expect(parseUnitSpelling(text)).toBeNull();
   });

@@ -17,12 +17,16 @@ import {
 
 export type UnitSpelling =
   | { kind: 'spectral'; unit: SpectralIrradianceUnit }
-  /** An irradiance unit without a per-wavelength part, e.g. `mW/cm2`: not a spectrum. */
+  /**
+   * Not spectral irradiance: an irradiance unit without a per-wavelength part (`mW/cm2`), or a
+   * radiance unit, per steradian (`W/m2/sr/nm`).
+   */
   | { kind: 'not_spectral'; spelling: string };
 
 const POWER = /^([mun]?)w$/;
 const AREA = /^([cm]?m)-?2(nm|um)?(?:-?1)?$/;
 const INTERVAL = /^(nm|um)(?:-?1)?$/;
+const STERADIAN = /^sr(?:-?1)?$/;
 
 function tokens(text: string): string[] {
   const normalised = text
@@ -47,7 +51,10 @@ function tokens(text: string): string[] {
 
 /** Returns the unit found in `text`, or null when there is none. */
 export function parseUnitSpelling(text: string): UnitSpelling | null {
-  const t = tokens(text);
+  const all = tokens(text);
+  // Radiance is per steradian, wherever the sr stands: W/(m²·sr·nm), W sr-1 m-2 nm-1.
+  const t = all.filter((token) => !STERADIAN.test(token));
+  const perSteradian = t.length < all.length;
   for (let i = 0; i < t.length; i++) {
     const power = POWER.exec(t[i]);
     if (!power) continue;
@@ -56,6 +63,7 @@ export function parseUnitSpelling(text: string): UnitSpelling | null {
     const prefix = power[1] as PowerPrefix;
     const areaUnit = `${area[1]}2` as AreaUnit;
     const interval = (area[2] ?? INTERVAL.exec(t[i + 2] ?? '')?.[1]) as WavelengthIntervalUnit | undefined;
+    if (perSteradian) return { kind: 'not_spectral', spelling: `${prefix}W/${areaUnit}/sr${interval ? `/${interval}` : ''}` };
     if (interval) return { kind: 'spectral', unit: spectralIrradianceUnit(prefix, areaUnit, interval) };
     return { kind: 'not_spectral', spelling: `${prefix}W/${areaUnit}` };
   }
