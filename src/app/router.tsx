@@ -84,6 +84,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           children: [
             { index: true, lazy: () => import('./routes/lab/overview.tsx').then(c) },
             { path: 'runs', lazy: () => import('./routes/lab/runs.tsx').then(c) },
+            { path: 'check', lazy: () => import('./routes/lab/file-check.tsx').then(c) },
             { path: 'catalog', lazy: () => import('./routes/lab/catalog.tsx').then(c) },
             { path: 'review', lazy: () => import('./routes/lab/review.tsx').then(c) },
             { path: 'admin/users', lazy: () => import('./routes/lab/admin-users.tsx').then(c) },

@@ -12,6 +12,8 @@ describe('public site in Chromium', () => {
     await b.page.goto('/');
     await expect(b.page.title()).resolves.toMatch(/Benchlight/);
     const nav = b.page.getByRole('navigation', { name: 'Main' });
+    // The layout loads lazily after the title is set: wait for it before counting links.
+    await nav.getByRole('link', { name: 'Reports' }).waitFor();
     for (const name of ['Reports', 'Compare', 'Methodology', 'Request a test', 'Subscribe']) {
       expect(await nav.getByRole('link', { name }).count(), name).toBe(1);
     }

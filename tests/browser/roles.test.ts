@@ -5,9 +5,9 @@ import { openBrowser, signIn } from './helpers/browser.ts';
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!;
 
 const EXPECTED_NAV: Record<string, string[]> = {
-  tester: ['Overview', 'Runs', 'Catalog'],
-  editor: ['Overview', 'Runs', 'Catalog', 'Review'],
-  admin: ['Overview', 'Runs', 'Catalog', 'Review', 'Users'],
+  tester: ['Overview', 'Runs', 'File check', 'Catalog'],
+  editor: ['Overview', 'Runs', 'File check', 'Catalog', 'Review'],
+  admin: ['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Users'],
 };
 
 describe('staff area in Chromium, per role', () => {

@@ -14,16 +14,16 @@ async function labNavItems(user: SessionUser) {
 }
 
 describe('lab shell', () => {
-  it('shows a tester Overview, Runs and Catalog', async () => {
-    expect(await labNavItems(people.tester)).toEqual(['Overview', 'Runs', 'Catalog']);
+  it('shows a tester Overview, Runs, File check and Catalog', async () => {
+    expect(await labNavItems(people.tester)).toEqual(['Overview', 'Runs', 'File check', 'Catalog']);
   });
 
   it('shows an editor Review as well', async () => {
-    expect(await labNavItems(people.editor)).toEqual(['Overview', 'Runs', 'Catalog', 'Review']);
+    expect(await labNavItems(people.editor)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review']);
   });
 
   it('shows an admin Users as well', async () => {
-    expect(await labNavItems(people.admin)).toEqual(['Overview', 'Runs', 'Catalog', 'Review', 'Users']);
+    expect(await labNavItems(people.admin)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Users']);
   });
 
   it('names the signed-in user and role and offers to sign out', async () => {

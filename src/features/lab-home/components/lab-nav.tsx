@@ -6,6 +6,7 @@ import { cn } from '../../../lib/cn.ts';
 export const LAB_SECTIONS: ReadonlyArray<{ to: string; label: string; capability: Capability; end?: boolean }> = [
   { to: '/lab', label: 'Overview', capability: 'lab.enter', end: true },
   { to: '/lab/runs', label: 'Runs', capability: 'runs.create' },
+  { to: '/lab/check', label: 'File check', capability: 'runs.upload' },
   { to: '/lab/catalog', label: 'Catalog', capability: 'catalog.manage' },
   { to: '/lab/review', label: 'Review', capability: 'runs.review' },
   { to: '/lab/admin/users', label: 'Users', capability: 'users.manage' },
