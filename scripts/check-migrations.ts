@@ -2,26 +2,19 @@
  * CI check: on an empty database, migrate latest → roll everything back → latest again,
  * so every migration's down() is proven to undo its up().
  */
-import { start, ensureDatabase, dropDatabase } from '../server/db/embedded-postgres.ts';
-import { resolveDatabaseUrl, withDatabase } from '../server/db/database-url.ts';
+import { dropDatabase } from '../server/db/database-admin.ts';
+import { freshDatabase } from './lib/fresh-database.ts';
 import { knexCli } from './lib/run-step.ts';
 
 const DATABASE = 'benchlight_migrations_check';
 
 async function main() {
-  let url: string;
-  if (process.env.DATABASE_URL) {
-    url = process.env.MIGRATIONS_CHECK_DATABASE_URL ?? withDatabase(process.env.DATABASE_URL, DATABASE);
-  } else {
-    await start(() => {});
-    await dropDatabase(DATABASE);
-    await ensureDatabase(DATABASE);
-    url = withDatabase(resolveDatabaseUrl(), DATABASE);
-  }
+  const override = process.env.MIGRATIONS_CHECK_DATABASE_URL;
+  const url = await freshDatabase(DATABASE, override);
   knexCli('migrate:latest on an empty database', ['migrate:latest'], url);
   knexCli('migrate:rollback --all', ['migrate:rollback', '--all'], url);
   knexCli('migrate:latest again', ['migrate:latest'], url);
-  if (!process.env.DATABASE_URL) await dropDatabase(DATABASE);
+  if (!override) await dropDatabase(url);
   console.log('\nMigrations: latest → rollback → latest passed.');
 }
 

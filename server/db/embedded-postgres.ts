@@ -10,6 +10,7 @@ import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { createHash } from 'node:crypto';
+import { ensureDatabase } from './database-admin.ts';
 
 export const PROJECT_ROOT = path.resolve(import.meta.dirname, '..', '..');
 export const DATA_DIR = path.join(PROJECT_ROOT, '.data');
@@ -235,7 +236,7 @@ export async function start(log: (s: string) => void = (s) => console.log(s)): P
     }
   }
   await waitReady(ownBin, port);
-  await ensureDatabase(APP_DATABASE);
+  await ensureDatabase(embeddedDatabaseUrl(APP_DATABASE));
   return embeddedDatabaseUrl(APP_DATABASE);
 }
 
@@ -246,32 +247,6 @@ async function waitReady(bin: string, port: number): Promise<void> {
     await new Promise((r) => setTimeout(r, 200));
   }
   throw new EmbeddedPgError(`PostgreSQL on 127.0.0.1:${port} did not become ready within 30 s.`);
-}
-
-/** Creates a database on the embedded cluster unless it exists. */
-export async function ensureDatabase(name: string): Promise<void> {
-  if (!/^[a-z_][a-z0-9_]*$/.test(name)) throw new EmbeddedPgError(`Bad database name "${name}".`);
-  const pg = (await import('pg')).default;
-  const client = new pg.Client({ connectionString: embeddedDatabaseUrl('postgres') });
-  await client.connect();
-  try {
-    const found = await client.query('select 1 from pg_database where datname = $1', [name]);
-    if (found.rowCount === 0) await client.query(`create database "${name}"`);
-  } finally {
-    await client.end();
-  }
-}
-
-export async function dropDatabase(name: string): Promise<void> {
-  if (!/^[a-z_][a-z0-9_]*$/.test(name)) throw new EmbeddedPgError(`Bad database name "${name}".`);
-  const pg = (await import('pg')).default;
-  const client = new pg.Client({ connectionString: embeddedDatabaseUrl('postgres') });
-  await client.connect();
-  try {
-    await client.query(`drop database if exists "${name}" with (force)`);
-  } finally {
-    await client.end();
-  }
 }
 
 export function stop(): boolean {

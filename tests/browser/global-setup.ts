@@ -8,8 +8,7 @@ import fs from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
-import { start, ensureDatabase, dropDatabase } from '../../server/db/embedded-postgres.ts';
-import { resolveDatabaseUrl, withDatabase } from '../../server/db/database-url.ts';
+import { freshDatabase } from '../../scripts/lib/fresh-database.ts';
 import { CHROMIUM_PATH } from '../../scripts/lib/chromium.ts';
 import { knexCli, runStep, ROOT } from '../../scripts/lib/run-step.ts';
 
@@ -57,15 +56,7 @@ export default async function setup(project: TestProject) {
         'Run "npm test" (it installs Chromium as root) or: apt-get install -y chromium',
     );
   }
-  let databaseUrl: string;
-  if (process.env.DATABASE_URL) {
-    databaseUrl = process.env.E2E_DATABASE_URL ?? withDatabase(process.env.DATABASE_URL, E2E_DATABASE);
-  } else {
-    await start(() => {});
-    await dropDatabase(E2E_DATABASE);
-    await ensureDatabase(E2E_DATABASE);
-    databaseUrl = withDatabase(resolveDatabaseUrl(), E2E_DATABASE);
-  }
+  const databaseUrl = await freshDatabase(E2E_DATABASE, process.env.E2E_DATABASE_URL);
   knexCli('Migrate the browser-test database', ['migrate:latest'], databaseUrl);
   knexCli('Seed the browser-test database', ['seed:run'], databaseUrl);
   if (!fs.existsSync(path.join(ROOT, 'dist', 'index.html'))) {

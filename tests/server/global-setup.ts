@@ -5,9 +5,9 @@
  */
 import { execFileSync } from 'node:child_process';
 import path from 'node:path';
-import pg from 'pg';
 import type { TestProject } from 'vitest/node';
 import { start } from '../../server/db/embedded-postgres.ts';
+import { ensureDatabase } from '../../server/db/database-admin.ts';
 import { testDatabaseUrl } from './test-database.ts';
 
 declare module 'vitest' {
@@ -16,25 +16,10 @@ declare module 'vitest' {
   }
 }
 
-async function ensureDatabaseExists(url: string) {
-  const target = new URL(url);
-  const name = target.pathname.slice(1);
-  const admin = new URL(url);
-  admin.pathname = '/postgres';
-  const client = new pg.Client({ connectionString: admin.toString() });
-  await client.connect();
-  try {
-    const found = await client.query('select 1 from pg_database where datname = $1', [name]);
-    if (found.rowCount === 0) await client.query(`create database "${name.replace(/"/g, '')}"`);
-  } finally {
-    await client.end();
-  }
-}
-
 export default async function setup(project: TestProject) {
   if (!process.env.DATABASE_URL && !process.env.TEST_DATABASE_URL) await start(() => {});
   const url = testDatabaseUrl();
-  await ensureDatabaseExists(url);
+  await ensureDatabase(url);
   const root = path.resolve(import.meta.dirname, '..', '..');
   execFileSync(
     process.execPath,

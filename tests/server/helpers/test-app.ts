@@ -15,9 +15,9 @@ import type { Role } from '../../../shared/auth/capabilities.ts';
  * The real app on the real test database, listening on an ephemeral 127.0.0.1 port so the
  * Origin check sees a real host; mail is collected in memory. `origin` is the app's own origin.
  */
-export async function makeTestApp(overrides: Partial<Record<string, string>> = {}) {
+export async function makeTestApp(overrides: Partial<Record<string, string>> = {}, databaseUrl: string = inject('databaseUrl')) {
   const config: Config = loadConfig({ NODE_ENV: 'test', LOG_LEVEL: 'silent', ...overrides });
-  const db: DbHandles = createDb(inject('databaseUrl'), () => {});
+  const db: DbHandles = createDb(databaseUrl, () => {});
   const sent: MailMessage[] = [];
   const mailer: Mailer = { send: async (m) => void sent.push(m) };
   const app = createApp({ config, db, mailer, clock: { now: () => new Date() }, logger: pino({ level: 'silent' }) });

@@ -7,8 +7,7 @@ export function PublicFooter() {
       <div className="mx-auto max-w-page space-y-6 px-gutter py-8">
         <Cautions title="Cautions for anyone using these devices" />
         <p className="max-w-measure text-sm text-ink-soft">
-          Benchlight publishes measurements, not medical advice. We buy or borrow the units we test and take no
-          payment from their makers.
+          Benchlight publishes measurements, not medical advice.
         </p>
         <p className="font-sans text-xs text-ink-muted">
           Benchlight · an independent test lab · <Link to="/methodology">How we measure</Link>
