@@ -75,7 +75,8 @@ export function ensureServerBinaries(log: (s: string) => void): string {
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
   const update = run('apt-get', ['update'], { env, stdio: 'inherit' });
   if (update.status !== 0) throw new EmbeddedPgError('apt-get update failed.');
-  const install = run('apt-get', ['install', '-y', '--no-install-recommends', 'postgresql'], {
+  // Keep our createcluster.conf if the package ships its own (no conffile prompt).
+  const install = run('apt-get', ['install', '-y', '--no-install-recommends', '-o', 'Dpkg::Options::=--force-confdef', '-o', 'Dpkg::Options::=--force-confold', 'postgresql'], {
     env,
     stdio: 'inherit',
   });
