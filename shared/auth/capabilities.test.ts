@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { CAPABILITIES, ROLES, can } from './capabilities.ts';
 
-// Source: product.md's role table (tester < editor < admin).
+// Roles nest: tester < editor < admin; review and publication are editors', users are admins'.
 describe('capability map', () => {
   it('gives every role the staff area', () => {
     for (const role of ROLES) expect(can(role, 'lab.enter')).toBe(true);
