@@ -51,15 +51,29 @@ describe('admin users page', () => {
     expect(screen.getByRole('button', { name: `Reactivate ${people.tester.email}` })).toBeTruthy();
   });
 
-  it('PATCHes the role when an admin picks another one', async () => {
+  it('PATCHes the role only when an admin saves the new one', async () => {
     const { calls } = adminApi({
       'PATCH /api/admin/users/u-eddy': { body: { user: { ...asUser(people.editor), role: 'tester' } } },
     });
     const { user } = renderApp('/lab/admin/users');
     const select = await screen.findByRole('combobox', { name: `Role for ${people.editor.email}` });
+    await user.selectOptions(select, 'admin');
     await user.selectOptions(select, 'tester');
+    expect(calls.some((c) => c.method === 'PATCH')).toBe(false);
+    await user.click(screen.getByRole('button', { name: `Save role for ${people.editor.email}` }));
     expect((await screen.findByText(`${people.editor.email} is now Tester.`)).textContent).toBeTruthy();
-    expect(calls.find((c) => c.method === 'PATCH')?.body).toEqual({ role: 'tester' });
+    expect(calls.filter((c) => c.method === 'PATCH').map((c) => c.body)).toEqual([{ role: 'tester' }]);
+  });
+
+  it('puts the role back when the change is cancelled', async () => {
+    const { calls } = adminApi();
+    const { user } = renderApp('/lab/admin/users');
+    const select = (await screen.findByRole('combobox', { name: `Role for ${people.editor.email}` })) as HTMLSelectElement;
+    await user.selectOptions(select, 'tester');
+    await user.click(screen.getByRole('button', { name: `Keep the role of ${people.editor.email}` }));
+    expect(select.value).toBe('editor');
+    expect(screen.queryByRole('button', { name: `Save role for ${people.editor.email}` })).toBeNull();
+    expect(calls.some((c) => c.method === 'PATCH')).toBe(false);
   });
 
   it('asks for confirmation before deactivating', async () => {

@@ -23,28 +23,49 @@ function problem(error: unknown): string {
   return 'something went wrong';
 }
 
+/**
+ * The role is chosen first and saved with a button: with the keyboard, a closed select changes
+ * value on every arrow key, which must not send a change (and an audit row) per step.
+ */
 function RoleCell({ user, isSelf, report }: { user: User; isSelf: boolean; report: Report }) {
   const update = useUpdateUser();
+  const [draft, setDraft] = useState<Role>(user.role);
+  const changed = draft !== user.role;
+  const save = () =>
+    update.mutate(
+      { id: user.id, changes: { role: draft } },
+      {
+        onSuccess: (u) => report({ tone: 'success', text: `${u.email} is now ${ROLE_LABELS[u.role]}.` }),
+        onError: (e) => {
+          setDraft(user.role);
+          report({ tone: 'error', text: `The role of ${user.email} was not changed: ${problem(e)}.` });
+        },
+      },
+    );
   return (
-    <Select
-      aria-label={`Role for ${user.email}`}
-      aria-describedby={isSelf ? SELF_NOTE_ID : undefined}
-      className="min-w-32"
-      options={roleOptions}
-      value={user.role}
-      disabled={isSelf}
-      onChange={(event) => {
-        const role = event.target.value as Role;
-        update.mutate(
-          { id: user.id, changes: { role } },
-          {
-            onSuccess: (u) => report({ tone: 'success', text: `${u.email} is now ${ROLE_LABELS[u.role]}.` }),
-            onError: (e) =>
-              report({ tone: 'error', text: `The role of ${user.email} was not changed: ${problem(e)}.` }),
-          },
-        );
-      }}
-    />
+    <div className="flex flex-wrap items-center gap-2">
+      <Select
+        aria-label={`Role for ${user.email}`}
+        aria-describedby={isSelf ? SELF_NOTE_ID : undefined}
+        className="min-w-32"
+        options={roleOptions}
+        value={draft}
+        disabled={isSelf || update.isPending}
+        onChange={(event) => setDraft(event.target.value as Role)}
+      />
+      {changed ? (
+        <>
+          <Button size="sm" aria-label={`Save role for ${user.email}`} pending={update.isPending} onClick={save}>
+            Save
+          </Button>
+          {!update.isPending ? (
+            <Button variant="quiet" size="sm" aria-label={`Keep the role of ${user.email}`} onClick={() => setDraft(user.role)}>
+              Cancel
+            </Button>
+          ) : null}
+        </>
+      ) : null}
+    </div>
   );
 }
 
