@@ -11,7 +11,7 @@ import type { Config } from 'tailwindcss';
  *   focus ring 4.5 (≥ 3 required).
  * The palette replaces Tailwind's defaults on purpose: only these names exist.
  */
-const palette = {
+export const palette = {
   transparent: 'transparent',
   current: 'currentColor',
   white: '#ffffff',

@@ -10,7 +10,7 @@ import path from 'node:path';
 import { start } from '../server/db/embedded-postgres.ts';
 import { resolveDatabaseUrl } from '../server/db/database-url.ts';
 import { DEMO_USERS } from '../seeds/data/demo-users.ts';
-import { knexCli, runStep, ROOT } from './lib/run-step.ts';
+import { buildClient, knexCli, runStep, ROOT } from './lib/run-step.ts';
 
 async function main() {
   if (process.env.NODE_ENV === 'production') throw new Error('The demo does not run with NODE_ENV=production.');
@@ -24,7 +24,7 @@ async function main() {
   runStep('Write the demo exports to demo-data/ (try them with the bench CLI)', process.execPath, [
     '--import', 'tsx', path.join(ROOT, 'scripts', 'make-demo-data.ts'), '--out', path.join(ROOT, 'demo-data'),
   ]);
-  runStep('Build the web client', process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn']);
+  buildClient();
 
   console.log('\nDemo accounts:');
   for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(7)} ${u.email}  /  ${u.password}`);

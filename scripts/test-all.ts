@@ -7,7 +7,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { start } from '../server/db/embedded-postgres.ts';
 import { ensureChromium } from './lib/chromium.ts';
-import { ROOT, runStep } from './lib/run-step.ts';
+import { buildClient, ROOT, runStep } from './lib/run-step.ts';
 
 const RESULTS = path.join(ROOT, '.tmp', 'vitest-results.json');
 
@@ -24,7 +24,7 @@ async function main() {
     await start();
   }
   ensureChromium();
-  runStep('Build the client for the browser tests', process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn']);
+  buildClient('Build the client for the browser tests');
   fs.rmSync(RESULTS, { force: true });
   try {
     runStep('Tests: shared, server, client, browser', process.execPath, [

@@ -27,7 +27,6 @@ export const errorBodySchema = z.object({
     details: z.unknown().optional(),
   }),
 });
-export type ErrorBody = z.infer<typeof errorBodySchema>;
 
 /** The shape of `details` for validation_failed: one entry per offending field. */
 export interface FieldIssue {

@@ -12,6 +12,7 @@ import type { ImportIssue } from '../../shared/measurement/import/import-issue.t
 import { importMeterReadings, type MeterReading } from '../../shared/measurement/import/meter-readings-import.ts';
 import { falloffExponent } from '../../shared/measurement/distance/falloff.ts';
 import { analyzePlane } from '../../shared/measurement/plane/analyze-plane.ts';
+import { groupPlanesByDistance } from '../../shared/measurement/plane/group-planes.ts';
 import type { FootprintCm } from '../../shared/measurement/plane/uniformity.ts';
 
 export const GRID_USAGE =
@@ -19,9 +20,6 @@ export const GRID_USAGE =
   '  FILE         meter readings with columns distance_cm, x_cm, y_cm, irradiance_mw_cm2\n' +
   '  --footprint  emitting area W × H in cm (e.g. 34x80, 34X80 or 34×80) for uniformity figures\n' +
   'Prints one JSON document. Exit 0: file usable; 1: file not usable; 2: bad command line.\n';
-
-/** Distances closer than this (cm) are one plane: tolerates float noise in files. */
-const SAME_DISTANCE_CM = 1e-6;
 
 export interface GridPlaneReport {
   distanceCm: number;
@@ -65,18 +63,6 @@ function parseOptions(args: string[]): ParsedArgs {
   return { ok: true, help: false, file: cl.files[0], footprint };
 }
 
-/** Readings grouped into planes by distance, sorted by distance. */
-function groupPlanes(readings: readonly MeterReading[]): { distanceCm: number; readings: MeterReading[] }[] {
-  const sorted = [...readings].sort((a, b) => a.distanceCm - b.distanceCm);
-  const planes: { distanceCm: number; readings: MeterReading[] }[] = [];
-  for (const r of sorted) {
-    const last = planes[planes.length - 1];
-    if (last && r.distanceCm - last.distanceCm < SAME_DISTANCE_CM) last.readings.push(r);
-    else planes.push({ distanceCm: r.distanceCm, readings: [r] });
-  }
-  return planes;
-}
-
 /** The JSON report for readings already imported (pure: no I/O). */
 export function buildGridReport(
   file: string,
@@ -84,7 +70,7 @@ export function buildGridReport(
   footprint: FootprintCm | null,
   issues: ImportIssue[] = [],
 ): GridReport {
-  const planes = groupPlanes(readings).map(({ distanceCm, readings: rs }): GridPlaneReport => {
+  const planes = groupPlanesByDistance(readings).map(({ distanceCm, readings: rs }): GridPlaneReport => {
     const a = analyzePlane(
       rs.map((r) => ({ xCm: r.xCm, yCm: r.yCm, value: r.irradianceMwCm2 })),
       footprint ? { footprint, levelsPct: [80, 50, 25] } : { levelsPct: [80, 50, 25] },

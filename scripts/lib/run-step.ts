@@ -16,3 +16,8 @@ export function knexCli(label: string, args: string[], databaseUrl: string): voi
     DATABASE_URL: databaseUrl,
   });
 }
+
+/** `vite build` of the web client into dist/. */
+export function buildClient(label = 'Build the web client'): void {
+  runStep(label, process.execPath, [path.join(ROOT, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn']);
+}

@@ -29,7 +29,8 @@ export interface ValidatedSession {
 }
 
 export interface SessionAuth {
-  readonly cookieName: string;
+  /** The session id in a Cookie header, or null. */
+  readSessionId(cookieHeader: string | undefined): string | null;
   createSession(userId: string, secure: boolean): Promise<{ sessionId: string; cookie: string }>;
   validate(sessionId: string, secure: boolean): Promise<ValidatedSession | null>;
   invalidateSession(sessionId: string): Promise<void>;
@@ -60,7 +61,7 @@ export function createSessionAuth(pool: pg.Pool): SessionAuth {
   };
 
   return {
-    cookieName: lucia.sessionCookieName,
+    readSessionId: (cookieHeader) => (cookieHeader ? lucia.readSessionCookie(cookieHeader) : null),
     async createSession(userId, secure) {
       const session = await lucia.createSession(userId, {});
       return { sessionId: session.id, cookie: serialize(lucia.createSessionCookie(session.id), secure) };

@@ -182,8 +182,26 @@ export interface ClusterStatus {
   binaries: string | null;
 }
 
+/** The cluster's data folder when one has been set up here, else null. */
+function existingClusterDir(): string | null {
+  return fs.existsSync(CLUSTER_LINK) ? fs.realpathSync(CLUSTER_LINK) : null;
+}
+
+/** A cluster must be run by the binaries of the major version that made it. */
+function ownBinaries(dir: string): string {
+  const major = fs.readFileSync(path.join(dir, 'PG_VERSION'), 'utf8').trim();
+  const bin = `/usr/lib/postgresql/${major}/bin`;
+  if (!fs.existsSync(path.join(bin, 'postgres'))) {
+    throw new EmbeddedPgError(
+      `The cluster in ${dir} was made by PostgreSQL ${major}, whose binaries are gone. ` +
+        'Remove .data/ (this deletes the local data) or reinstall that version.',
+    );
+  }
+  return bin;
+}
+
 export function status(): ClusterStatus {
-  const dir = fs.existsSync(CLUSTER_LINK) ? fs.realpathSync(CLUSTER_LINK) : null;
+  const dir = existingClusterDir();
   const pid = dir && isInitialised(dir) ? runningPid(dir) : null;
   return { running: pid !== null, pid, port: pgPort(), dataDir: dir, binaries: findServerBinaries() };
 }
@@ -205,19 +223,8 @@ export async function start(log: (s: string) => void = (s) => console.log(s)): P
     ]);
     fs.rmSync(pwFile, { force: true });
     if (init.status !== 0) throw new EmbeddedPgError(`initdb failed:\n${init.stderr || init.stdout}`);
-  } else {
-    // A cluster must be started by the binaries of its own major version.
-    const major = fs.readFileSync(path.join(dir, 'PG_VERSION'), 'utf8').trim();
-    const own = `/usr/lib/postgresql/${major}/bin`;
-    if (!fs.existsSync(path.join(own, 'postgres'))) {
-      throw new EmbeddedPgError(
-        `The cluster in ${dir} was made by PostgreSQL ${major}, whose binaries are gone. ` +
-          'Remove .data/ (this deletes the local data) or reinstall that version.',
-      );
-    }
   }
-  const major = fs.readFileSync(path.join(dir, 'PG_VERSION'), 'utf8').trim();
-  const ownBin = `/usr/lib/postgresql/${major}/bin`;
+  const ownBin = ownBinaries(dir);
 
   if (runningPid(dir) === null) {
     if (await portAnswers(port)) {
@@ -237,8 +244,9 @@ export async function start(log: (s: string) => void = (s) => console.log(s)): P
     }
   }
   await waitReady(ownBin, port);
-  await ensureDatabase(embeddedDatabaseUrl(APP_DATABASE));
-  return embeddedDatabaseUrl(APP_DATABASE);
+  const url = embeddedDatabaseUrl(APP_DATABASE);
+  await ensureDatabase(url);
+  return url;
 }
 
 async function waitReady(bin: string, port: number): Promise<void> {
@@ -251,10 +259,9 @@ async function waitReady(bin: string, port: number): Promise<void> {
 }
 
 export function stop(): boolean {
-  const dir = fs.existsSync(CLUSTER_LINK) ? fs.realpathSync(CLUSTER_LINK) : null;
+  const dir = existingClusterDir();
   if (!dir || !isInitialised(dir) || runningPid(dir) === null) return false;
-  const major = fs.readFileSync(path.join(dir, 'PG_VERSION'), 'utf8').trim();
-  const result = asServerUser(serverUser(), `/usr/lib/postgresql/${major}/bin/pg_ctl`, [
+  const result = asServerUser(serverUser(), path.join(ownBinaries(dir), 'pg_ctl'), [
     'stop', '-w', '-t', '60', '-m', 'fast', '-D', dir,
   ]);
   if (result.status !== 0) throw new EmbeddedPgError(`pg_ctl stop failed:\n${result.stderr}`);

@@ -6,8 +6,6 @@ import pg from 'pg';
 pg.types.setTypeParser(pg.types.builtins.INT8, (v) => Number(v));
 pg.types.setTypeParser(pg.types.builtins.NUMERIC, (v) => Number(v));
 
-export type Db = Knex;
-
 export interface DbHandles {
   knex: Knex;
   /** A plain pg Pool for the session adapter and the rate limiter, which want one. */

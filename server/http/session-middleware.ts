@@ -2,21 +2,12 @@ import type { RequestHandler } from 'express';
 import type { SessionAuth } from '../auth/session-auth.ts';
 import './express-augment.ts';
 
-function readCookie(header: string | undefined, name: string): string | null {
-  if (!header) return null;
-  for (const part of header.split(';')) {
-    const eq = part.indexOf('=');
-    if (eq > 0 && part.slice(0, eq).trim() === name) return decodeURIComponent(part.slice(eq + 1).trim());
-  }
-  return null;
-}
-
 /** Resolves the session cookie into req.caller; clears cookies of ended sessions. */
 export function sessionMiddleware(sessions: SessionAuth): RequestHandler {
   return async (req, res, next) => {
     req.caller = { user: null, requestId: String(req.id ?? ''), ip: req.ip ?? 'unknown' };
     req.sessionId = null;
-    const sessionId = readCookie(req.headers.cookie, sessions.cookieName);
+    const sessionId = sessions.readSessionId(req.headers.cookie);
     if (!sessionId) return next();
     try {
       const found = await sessions.validate(sessionId, req.secure);

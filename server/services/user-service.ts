@@ -40,14 +40,14 @@ export function createUserService(deps: ServiceDeps) {
     async update(caller: Caller, id: string, body: UpdateUserBody): Promise<User> {
       const me = requireManager(caller);
       const updated = await deps.db.transaction(async (trx) => {
+        // Lock the active admins first, so two requests cannot remove the last two at once.
+        await trx.raw("select id from users where role = 'admin' and active for update");
         const before = await usersRepo.findById(trx, id);
         if (!before) throw notFound('That user');
         if (id === me.id && (body.active === false || (body.role && body.role !== 'admin'))) {
           throw new AppError('conflict', 'You cannot deactivate yourself or remove your own admin role.');
         }
         const losesAdmin = before.role === 'admin' && before.active && (body.active === false || (body.role && body.role !== 'admin'));
-        // Lock the admins so two requests cannot remove the last two at once.
-        await trx.raw("select id from users where role = 'admin' and active for update");
         if (losesAdmin && (await usersRepo.countActiveAdmins(trx)) <= 1) {
           throw new AppError('conflict', 'The lab needs at least one active admin.');
         }

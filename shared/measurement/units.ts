@@ -21,12 +21,6 @@ export function jCm2ToJm2(jCm2: number): number {
 export function jm2ToJCm2(jm2: number): number {
   return jm2 / 1e4;
 }
-export function cmToM(cm: number): number {
-  return cm / 100;
-}
-export function mToCm(m: number): number {
-  return m * 100;
-}
 export function cmToInch(cm: number): number {
   return cm / 2.54; // 1 in = 2.54 cm exactly (international yard and pound agreement, 1959)
 }

@@ -10,7 +10,7 @@ import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { freshDatabase } from '../../scripts/lib/fresh-database.ts';
 import { CHROMIUM_PATH } from '../../scripts/lib/chromium.ts';
-import { knexCli, runStep, ROOT } from '../../scripts/lib/run-step.ts';
+import { buildClient, knexCli, ROOT } from '../../scripts/lib/run-step.ts';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -60,7 +60,7 @@ export default async function setup(project: TestProject) {
   knexCli('Migrate the browser-test database', ['migrate:latest'], databaseUrl);
   knexCli('Seed the browser-test database', ['seed:run'], databaseUrl);
   if (!fs.existsSync(path.join(ROOT, 'dist', 'index.html'))) {
-    runStep('Build the client', process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn']);
+    buildClient('Build the client');
   }
 
   const port = await freePort();

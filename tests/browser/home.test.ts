@@ -26,8 +26,11 @@ describe('public site in Chromium', () => {
     await b.page.goto('/');
     await b.page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Compare' }).click();
     await b.page.waitForURL('**/compare');
+    // The route module loads lazily: wait for its heading before reading the page.
+    await b.page.getByRole('heading', { level: 1, name: 'Compare' }).waitFor();
     expect(await b.page.locator('main').innerText()).toMatch(/not built yet/i);
     await b.page.goto('/no/such/page');
+    await b.page.getByRole('heading', { level: 1, name: /not found/i }).waitFor();
     expect(await b.page.getByRole('heading', { level: 1 }).innerText()).toMatch(/not found/i);
   });
 });

@@ -28,6 +28,7 @@ describe('staff area in Chromium, per role', () => {
   it('sends a signed-out visitor of /lab to the sign-in page', async () => {
     await b.page.goto('/lab');
     await b.page.waitForURL(/\/lab\/sign-in/);
+    await b.page.getByRole('heading', { level: 1, name: 'Staff sign-in' }).waitFor();
     expect(await b.page.getByRole('button', { name: 'Sign in' }).count()).toBe(1);
   });
 

@@ -46,7 +46,7 @@ describe('unknown errors', () => {
     const sink = new Writable({ write: (chunk, _enc, done) => (lines.push(String(chunk)), done()) });
     const db = createDb(inject('databaseUrl'), () => {});
     const broken = {
-      cookieName: 'benchlight_session',
+      readSessionId: () => 'abc',
       validate: async () => {
         throw new Error('session store exploded: secret detail');
       },

@@ -17,3 +17,4 @@ export {
   type ZoneCoverageOptions,
 } from './zone-coverage.ts';
 export { planeCoverage, type PlaneCoverage, type PlaneCoverageOptions } from './plane-coverage.ts';
+export { groupPlanesByDistance } from './group-planes.ts';

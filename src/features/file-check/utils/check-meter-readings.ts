@@ -13,6 +13,7 @@ import {
 import { analyzePlane, type PlaneAnalysis } from '../../../../shared/measurement/plane/analyze-plane.ts';
 import { coverageMap, type CoverageMap } from '../../../../shared/measurement/plane/coverage-map.ts';
 import { planeCoverage, type PlaneCoverage } from '../../../../shared/measurement/plane/plane-coverage.ts';
+import { groupPlanesByDistance } from '../../../../shared/measurement/plane/group-planes.ts';
 import type { PlanePoint } from '../../../../shared/measurement/plane/plane-points.ts';
 import type { FootprintCm } from '../../../../shared/measurement/plane/uniformity.ts';
 import {
@@ -68,13 +69,7 @@ function planeMap(distanceCm: number, readings: readonly MeterReading[]): PlaneM
 
 export function checkMeterReadings(decoded: DecodedText): MeterCheck {
   const result = importMeterReadings(decoded.text);
-  const byDistance = new Map<number, MeterReading[]>();
-  for (const r of result.readings) {
-    const list = byDistance.get(r.distanceCm) ?? [];
-    list.push(r);
-    byDistance.set(r.distanceCm, list);
-  }
-  const planes = [...byDistance.entries()].sort((a, b) => a[0] - b[0]).map(([d, list]) => planeMap(d, list));
+  const planes = groupPlanesByDistance(result.readings).map((p) => planeMap(p.distanceCm, p.readings));
   return { encoding: decoded.encoding, result, issues: [...decoded.issues, ...result.issues], planes };
 }
 

@@ -1,13 +1,12 @@
-/**
- * Colours the chart library needs as literal values. They are the palette of tailwind.config.ts
- * (which exports none at run time); keep the two in step.
- */
+import { palette } from '../../../../tailwind.config.ts';
+
+/** Colours the chart library needs as literal values, taken from the one palette. */
 export const DATA_COLOURS = {
-  ink: '#1b1d21',
-  inkMuted: '#595e66',
-  rule: '#d6cdbb',
-  paper: '#fcfaf5',
-  signal: '#0f5c63',
-  ember: '#a8321e',
-  infra: '#5e3a73',
+  ink: palette.ink.DEFAULT,
+  inkMuted: palette.ink.muted,
+  rule: palette.rule.DEFAULT,
+  paper: palette.paper.raised,
+  signal: palette.signal.DEFAULT,
+  ember: palette.ember,
+  infra: palette.infra,
 } as const;
