@@ -15,7 +15,6 @@ const config: Knex.Config = {
     loadExtensions: ['.ts'],
     tableName: 'knex_migrations',
   },
-  seeds: { directory: './seeds', extension: 'ts', loadExtensions: ['.ts'] },
 };
 
 export default config;

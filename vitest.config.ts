@@ -11,7 +11,7 @@ export default defineConfig({
       {
         test: {
           name: 'shared',
-          include: ['shared/**/*.test.ts', 'scripts/**/*.test.ts'],
+          include: ['shared/**/*.test.ts', 'scripts/**/*.test.ts', 'seeds/**/*.test.ts'],
           environment: 'node',
         },
       },

@@ -6,10 +6,10 @@
  * bytes. Prints throughput, peak memory and whether the targets are met; never fails the build.
  */
 import { parse } from 'csv-parse/sync';
-import { decodeTextBytes } from '../shared/measurement/import/decode-text.ts';
-import { importSpectrum } from '../shared/measurement/import/spectrum-import.ts';
-import { DEFAULT_BANDS } from '../shared/measurement/spectral/band-list.ts';
-import { summariseSpectrum } from '../shared/measurement/spectral/spectrum-summary.ts';
+import { decodeTextBytes } from '#shared/measurement/import/decode-text.ts';
+import { importSpectrum } from '#shared/measurement/import/spectrum-import.ts';
+import { DEFAULT_BANDS } from '#shared/measurement/spectral/band-list.ts';
+import { summariseSpectrum } from '#shared/measurement/spectral/spectrum-summary.ts';
 
 const DISTANCES_CM = [15, 30, 60];
 const GRID_X = 15;

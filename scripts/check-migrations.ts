@@ -2,7 +2,7 @@
  * CI check: on an empty database, migrate latest → roll everything back → latest again,
  * so every migration's down() is proven to undo its up().
  */
-import { dropDatabase } from '../server/db/database-admin.ts';
+import { dropDatabase } from '#server/db/database-admin.ts';
 import { freshDatabase } from './lib/fresh-database.ts';
 import { knexCli } from './lib/run-step.ts';
 

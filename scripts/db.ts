@@ -2,7 +2,7 @@
  * npm run db:start | db:stop | db:status — the project's own PostgreSQL on 127.0.0.1.
  * With DATABASE_URL set, the app uses that database and this script starts nothing.
  */
-import { EmbeddedPgError, start, status, stop } from '../server/db/embedded-postgres.ts';
+import { EmbeddedPgError, start, status, stop } from '#server/db/embedded-postgres.ts';
 
 const command = process.argv[2];
 

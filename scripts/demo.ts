@@ -7,10 +7,10 @@
  */
 import { spawn } from 'node:child_process';
 import path from 'node:path';
-import { start } from '../server/db/embedded-postgres.ts';
-import { resolveDatabaseUrl } from '../server/db/database-url.ts';
-import { DEMO_USERS } from '../seeds/data/demo-users.ts';
-import { buildClient, knexCli, runStep, ROOT } from './lib/run-step.ts';
+import { start } from '#server/db/embedded-postgres.ts';
+import { resolveDatabaseUrl } from '#server/db/database-url.ts';
+import { DEMO_USERS } from '#seeds/data/demo-users.ts';
+import { buildClient, knexCli, runStep, ROOT, seedDemoData } from './lib/run-step.ts';
 
 async function main() {
   if (process.env.NODE_ENV === 'production') throw new Error('The demo does not run with NODE_ENV=production.');
@@ -20,7 +20,7 @@ async function main() {
   }
   const databaseUrl = resolveDatabaseUrl();
   knexCli('Migrate', ['migrate:latest'], databaseUrl);
-  knexCli('Seed the demo data', ['seed:run'], databaseUrl);
+  seedDemoData('Seed the demo data', databaseUrl);
   runStep('Write the demo exports to demo-data/ (try them with the bench CLI)', process.execPath, [
     '--import', 'tsx', path.join(ROOT, 'scripts', 'make-demo-data.ts'), '--out', path.join(ROOT, 'demo-data'),
   ]);

@@ -3,7 +3,7 @@ import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { buildDemoScenario, DEMO_SEED } from '../shared/measurement/demo/scenario.ts';
+import { buildDemoScenario, DEMO_SEED } from '#seeds/demo/scenario.ts';
 
 describe('make-demo-data script', () => {
   it('writes the manifest and every file it lists, byte for byte, in under 5 s', () => {

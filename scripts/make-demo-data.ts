@@ -4,7 +4,7 @@
  */
 import { mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
-import { buildDemoScenario, DEMO_SEED } from '../shared/measurement/demo/scenario.ts';
+import { buildDemoScenario, DEMO_SEED } from '#seeds/demo/scenario.ts';
 
 function argValue(name: string): string | undefined {
   const i = process.argv.indexOf(name);

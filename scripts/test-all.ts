@@ -5,7 +5,7 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
-import { start } from '../server/db/embedded-postgres.ts';
+import { start } from '#server/db/embedded-postgres.ts';
 import { ensureChromium } from './lib/chromium.ts';
 import { buildClient, ROOT, runStep } from './lib/run-step.ts';
 

@@ -4,14 +4,11 @@
  * Without --password a strong one is generated and printed once.
  */
 import { parseArgs } from 'node:util';
-import { randomBytes, randomUUID } from 'node:crypto';
-import { z } from 'zod';
-import { createUserBodySchema } from '../shared/schemas/users.ts';
-import { hashPassword } from '../server/auth/password.ts';
-import { resolveDatabaseUrl } from '../server/db/database-url.ts';
-import { createDb, closeDb } from '../server/db/knex.ts';
-import { usersRepo } from '../server/db/repos/users-repo.ts';
-import { auditRepo } from '../server/db/repos/audit-repo.ts';
+import { randomBytes } from 'node:crypto';
+import { createUserBodySchema } from '#shared/schemas/users.ts';
+import { connect } from '#server/connect.ts';
+import { systemCaller } from '#server/core/caller.ts';
+import { AppError } from '#server/core/app-error.ts';
 
 async function main(): Promise<number> {
   const { values } = parseArgs({
@@ -37,33 +34,28 @@ async function main(): Promise<number> {
     return 2;
   }
   const body = parsed.data;
-  const db = createDb(resolveDatabaseUrl(), () => {});
+  const app = connect();
   try {
-    const user = await db.knex.transaction(async (trx) => {
-      if (await usersRepo.emailExists(trx, body.email)) return null;
-      const u = await usersRepo.insert(trx, { id: randomUUID(), ...body, passwordHash: await hashPassword(body.password), now: new Date() });
-      await auditRepo.insert(trx, {
-        actorUserId: null, actorLabel: 'command line', action: 'user.create', entityType: 'user', entityId: u.id,
-        after: { email: u.email, role: u.role }, at: new Date(),
-      });
-      return u;
-    });
-    if (!user) {
-      console.error(`An account with the e-mail ${body.email} already exists.`);
-      return 1;
-    }
+    // The same service the admin page uses, so the audit row is the same whoever creates a user.
+    const user = await app.services.users.create(systemCaller('cli'), body);
     console.log(`Created ${user.role} ${user.email} (id ${user.id}).`);
     if (generated) console.log(`Password (shown once): ${password}`);
     return 0;
+  } catch (err) {
+    if (err instanceof AppError && err.code === 'email_taken') {
+      console.error(`An account with the e-mail ${body.email} already exists.`);
+      return 1;
+    }
+    throw err;
   } finally {
-    await closeDb(db);
+    await app.close();
   }
 }
 
 main().then(
   (code) => (process.exitCode = code),
   (err: unknown) => {
-    console.error(err instanceof z.ZodError ? err.message : err);
+    console.error(err instanceof Error ? err.message : err);
     process.exitCode = 1;
   },
 );

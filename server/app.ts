@@ -7,18 +7,18 @@ import type { Logger } from 'pino';
 import type { Config } from './config.ts';
 import type { DbHandles } from './db/knex.ts';
 import type { Mailer } from './mail/mailer.ts';
-import type { Clock, ServiceDeps } from './services/context.ts';
+import type { Clock, ServiceDeps } from './core/context.ts';
 import { createSessionAuth, type SessionAuth } from './auth/session-auth.ts';
 import { createSignInLimiter, type SignInLimiter } from './auth/sign-in-limiter.ts';
-import { createAuthService } from './services/auth-service.ts';
-import { createUserService } from './services/user-service.ts';
+import { createServices } from './services/index.ts';
+import { pingDatabase } from './db/ping.ts';
 import { sessionMiddleware } from './http/session-middleware.ts';
 import { originCheck } from './http/origin-check.ts';
 import { apiNotFound, errorMiddleware } from './http/error-middleware.ts';
 import { securityHeaders } from './http/security-headers.ts';
 import { healthRoutes } from './routes/health-routes.ts';
 import { authRoutes } from './routes/auth-routes.ts';
-import { adminUserRoutes } from './routes/admin-user-routes.ts';
+import { usersRoutes } from './routes/users-routes.ts';
 
 export interface AppDeps {
   config: Config;
@@ -45,8 +45,7 @@ export function createApp(deps: AppDeps): Express {
       windowMinutes: config.SIGN_IN_WINDOW_MINUTES,
     });
   const serviceDeps: ServiceDeps = { db: db.knex, clock: deps.clock, sessions, signInLimiter, mailer: deps.mailer, logger };
-  const auth = createAuthService(serviceDeps);
-  const users = createUserService(serviceDeps);
+  const services = createServices(serviceDeps);
 
   const app = express();
   app.disable('x-powered-by');
@@ -68,9 +67,9 @@ export function createApp(deps: AppDeps): Express {
   api.use(express.json({ limit: '1mb' }));
   api.use(sessionMiddleware(sessions));
   api.use(originCheck(config.ALLOWED_ORIGINS.split(',').map((s) => s.trim()).filter(Boolean)));
-  api.use(healthRoutes(db.knex));
-  api.use(authRoutes(auth));
-  api.use(adminUserRoutes(users));
+  api.use(healthRoutes(() => pingDatabase(db.knex)));
+  api.use(authRoutes(services.auth));
+  api.use(usersRoutes(services.users));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { promisify } from 'node:util';
 import { linearRegression, mean, min, max, standardDeviation } from 'simple-statistics';
 import { describe, expect, it } from 'vitest';
-import { panelViewFactor } from '../../shared/measurement/geometry/view-factor.ts';
+import { panelViewFactor } from '#shared/measurement/geometry/view-factor.ts';
 import { buildGridReport, parseFootprintCm } from './grid-command.ts';
 
 const root = join(import.meta.dirname, '..', '..');

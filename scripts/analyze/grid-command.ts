@@ -7,13 +7,13 @@
  * (missing, unreadable, rejected by the importer, no readings), 2 bad command line.
  */
 import { parseCommandLine, readInputFile, tidy } from './cli-io.ts';
-import { decodeTextBytes } from '../../shared/measurement/import/decode-text.ts';
-import type { ImportIssue } from '../../shared/measurement/import/import-issue.ts';
-import { importMeterReadings, type MeterReading } from '../../shared/measurement/import/meter-readings-import.ts';
-import { falloffExponent } from '../../shared/measurement/distance/falloff.ts';
-import { analyzePlane } from '../../shared/measurement/plane/analyze-plane.ts';
-import { groupPlanesByDistance } from '../../shared/measurement/plane/group-planes.ts';
-import type { FootprintCm } from '../../shared/measurement/plane/uniformity.ts';
+import { decodeTextBytes } from '#shared/measurement/import/decode-text.ts';
+import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
+import { importMeterReadings, type MeterReading } from '#shared/measurement/import/meter-readings-import.ts';
+import { falloffExponent } from '#shared/measurement/distance/falloff.ts';
+import { analyzePlane } from '#shared/measurement/plane/analyze-plane.ts';
+import { groupPlanesByDistance } from '#shared/measurement/plane/group-planes.ts';
+import type { FootprintCm } from '#shared/measurement/plane/uniformity.ts';
 
 export const GRID_USAGE =
   'usage: analyze.ts grid [--footprint WxH] FILE\n' +

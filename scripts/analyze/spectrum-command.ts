@@ -6,13 +6,13 @@
  * 2 bad command line (unknown option or unit, malformed --bands, no file).
  */
 import { parseCommandLine, readInputFile, tidy } from './cli-io.ts';
-import { importSpectrum, KNOWN_UNITS_HINT } from '../../shared/measurement/import/spectrum-import.ts';
-import { decodeTextBytes } from '../../shared/measurement/import/decode-text.ts';
-import { parseSpectralUnit } from '../../shared/measurement/import/unit-spelling.ts';
-import type { ImportIssue } from '../../shared/measurement/import/import-issue.ts';
-import { DEFAULT_BANDS, parseBandList } from '../../shared/measurement/spectral/band-list.ts';
-import type { WavelengthBand } from '../../shared/measurement/spectral/spectrum.ts';
-import { summariseSpectrum } from '../../shared/measurement/spectral/spectrum-summary.ts';
+import { importSpectrum, KNOWN_UNITS_HINT } from '#shared/measurement/import/spectrum-import.ts';
+import { decodeTextBytes } from '#shared/measurement/import/decode-text.ts';
+import { parseSpectralUnit } from '#shared/measurement/import/unit-spelling.ts';
+import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
+import { DEFAULT_BANDS, parseBandList } from '#shared/measurement/spectral/band-list.ts';
+import type { WavelengthBand } from '#shared/measurement/spectral/spectrum.ts';
+import { summariseSpectrum } from '#shared/measurement/spectral/spectrum-summary.ts';
 
 export const SPECTRUM_USAGE =
   'usage: analyze.ts spectrum [--bands NAME=LO-HI,...] [--unit UNIT] FILE...\n' +

@@ -1,6 +1,6 @@
-import { start } from '../../server/db/embedded-postgres.ts';
-import { resolveDatabaseUrl, withDatabase } from '../../server/db/database-url.ts';
-import { dropDatabase, ensureDatabase } from '../../server/db/database-admin.ts';
+import { start } from '#server/db/embedded-postgres.ts';
+import { resolveDatabaseUrl, withDatabase } from '#server/db/database-url.ts';
+import { dropDatabase, ensureDatabase } from '#server/db/database-admin.ts';
 
 /**
  * An empty database called `name` on the app's server (DATABASE_URL, or the project's own

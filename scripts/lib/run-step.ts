@@ -21,3 +21,8 @@ export function knexCli(label: string, args: string[], databaseUrl: string): voi
 export function buildClient(label = 'Build the web client'): void {
   runStep(label, process.execPath, [path.join(ROOT, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn']);
 }
+
+/** The demo seed (scripts/seed-demo.ts) against one database. */
+export function seedDemoData(label: string, databaseUrl: string): void {
+  runStep(label, process.execPath, ['--import', 'tsx', path.join(ROOT, 'scripts', 'seed-demo.ts')], { DATABASE_URL: databaseUrl });
+}

@@ -1,4 +1,4 @@
-import type { Role } from '../../shared/auth/capabilities.ts';
+import type { Role } from '#shared/auth/capabilities.ts';
 
 // Fictional staff of the demo lab. The README's demo section prints these; keep them in step.
 export const DEMO_USERS: readonly { email: string; displayName: string; role: Role; password: string }[] = [

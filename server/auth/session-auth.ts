@@ -5,8 +5,8 @@
 import { Lucia, TimeSpan } from 'lucia';
 import { NodePostgresAdapter } from '@lucia-auth/adapter-postgresql';
 import type pg from 'pg';
-import type { Role } from '../../shared/auth/capabilities.ts';
-import type { SessionUser } from '../../shared/schemas/users.ts';
+import type { Role } from '#shared/auth/capabilities.ts';
+import type { SessionUser } from '#shared/schemas/users.ts';
 
 interface UserRow {
   email: string;

@@ -6,6 +6,10 @@ import pg from 'pg';
 pg.types.setTypeParser(pg.types.builtins.INT8, (v) => Number(v));
 pg.types.setTypeParser(pg.types.builtins.NUMERIC, (v) => Number(v));
 
+/** The query builder handle services pass around; only server/db knows it is Knex. */
+export type Db = Knex;
+export type Trx = Knex.Transaction;
+
 export interface DbHandles {
   knex: Knex;
   /** A plain pg Pool for the session adapter and the rate limiter, which want one. */

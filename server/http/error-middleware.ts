@@ -1,6 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Logger } from 'pino';
-import { AppError } from './app-error.ts';
+import { AppError } from '../core/app-error.ts';
 import { isDatabaseUnavailable } from '../db/is-database-unavailable.ts';
 
 /** Unknown /api paths answer in the API's own error shape rather than with the client app. */

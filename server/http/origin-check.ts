@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
 import { verifyRequestOrigin } from 'lucia';
-import { AppError } from './app-error.ts';
+import { AppError } from '../core/app-error.ts';
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 

@@ -5,7 +5,8 @@ import './express-augment.ts';
 /** Resolves the session cookie into req.caller; clears cookies of ended sessions. */
 export function sessionMiddleware(sessions: SessionAuth): RequestHandler {
   return async (req, res, next) => {
-    req.caller = { user: null, requestId: String(req.id ?? ''), ip: req.ip ?? 'unknown' };
+    const base = { requestId: String(req.id ?? ''), ip: req.ip ?? 'unknown' };
+    req.caller = { kind: 'anonymous', ...base };
     req.sessionId = null;
     const sessionId = sessions.readSessionId(req.headers.cookie);
     if (!sessionId) return next();
@@ -18,7 +19,7 @@ export function sessionMiddleware(sessions: SessionAuth): RequestHandler {
       }
       if (found.refreshedCookie) res.append('Set-Cookie', found.refreshedCookie);
       const { active: _active, ...user } = found.user;
-      req.caller.user = user;
+      req.caller = { kind: 'user', user, ...base };
       req.sessionId = found.sessionId;
       next();
     } catch (err) {

@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { validationFailed } from './app-error.ts';
+import { validationFailed } from '../core/app-error.ts';
 
 /** Parses a body, query or params with a shared zod schema; 422 with field paths on failure. */
 export function parseWith<S extends z.ZodType>(schema: S, value: unknown, where: 'body' | 'query' | 'params' = 'body'): z.infer<S> {

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { signInBodySchema, type MeResponse } from '../../shared/schemas/users.ts';
+import { signInBodySchema, type MeResponse } from '#shared/schemas/users.ts';
 import { parseWith } from '../http/validate.ts';
 import type { AuthService } from '../services/auth-service.ts';
 import '../http/express-augment.ts';
@@ -8,7 +8,7 @@ export function authRoutes(auth: AuthService): Router {
   const router = Router();
 
   router.get('/me', (req, res) => {
-    const body: MeResponse = { user: req.caller.user };
+    const body: MeResponse = { user: req.caller.kind === 'user' ? req.caller.user : null };
     res.setHeader('Cache-Control', 'no-store');
     res.json(body);
   });

@@ -51,9 +51,13 @@ export const createUserBodySchema = z.object({
 export type CreateUserBody = z.infer<typeof createUserBodySchema>;
 
 export const updateUserBodySchema = z
-  .object({ role: roleSchema.optional(), active: z.boolean().optional() })
-  .refine((b) => b.role !== undefined || b.active !== undefined, {
-    message: 'Say what to change: role or active.',
+  .object({
+    role: roleSchema.optional(),
+    active: z.boolean().optional(),
+    displayName: z.string().trim().min(1, { message: 'Enter a name.' }).max(120).optional(),
+  })
+  .refine((b) => b.role !== undefined || b.active !== undefined || b.displayName !== undefined, {
+    message: 'Say what to change: role, active or name.',
   });
 export type UpdateUserBody = z.infer<typeof updateUserBodySchema>;
 

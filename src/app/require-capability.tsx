@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { can, ROLE_LABELS, type Capability } from '../../shared/auth/capabilities.ts';
+import { can, ROLE_LABELS, type Capability } from '#shared/auth/capabilities.ts';
 import { NotAllowed } from '../components/not-allowed.tsx';
 import { useMe } from '../features/auth/api/get-me.ts';
 

@@ -87,7 +87,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             { path: 'check', lazy: () => import('./routes/lab/file-check.tsx').then(c) },
             { path: 'catalog', lazy: () => import('./routes/lab/catalog.tsx').then(c) },
             { path: 'review', lazy: () => import('./routes/lab/review.tsx').then(c) },
-            { path: 'admin/users', lazy: () => import('./routes/lab/admin-users.tsx').then(c) },
+            { path: 'admin/users', lazy: () => import('./routes/lab/users.tsx').then(c) },
             { path: '*', lazy: () => import('./routes/lab/not-found.tsx').then(c) },
           ],
         },

@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { errorBodySchema, type FieldIssue } from '../../shared/errors.ts';
+import { errorBodySchema, type FieldIssue } from '#shared/errors.ts';
 
 /**
  * The client's one door to the API: same-origin JSON with the session cookie.

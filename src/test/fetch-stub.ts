@@ -1,5 +1,5 @@
 import { vi } from 'vitest';
-import type { SessionUser } from '../../shared/schemas/users.ts';
+import type { SessionUser } from '#shared/schemas/users.ts';
 
 /**
  * Stubs `fetch`, the client's network boundary. Handlers are keyed "METHOD /path" and answer

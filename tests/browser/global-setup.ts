@@ -8,9 +8,9 @@ import fs from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
-import { freshDatabase } from '../../scripts/lib/fresh-database.ts';
-import { CHROMIUM_PATH } from '../../scripts/lib/chromium.ts';
-import { buildClient, knexCli, ROOT } from '../../scripts/lib/run-step.ts';
+import { freshDatabase } from '#scripts/lib/fresh-database.ts';
+import { CHROMIUM_PATH } from '#scripts/lib/chromium.ts';
+import { buildClient, knexCli, ROOT, seedDemoData } from '#scripts/lib/run-step.ts';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -58,7 +58,7 @@ export default async function setup(project: TestProject) {
   }
   const databaseUrl = await freshDatabase(E2E_DATABASE, process.env.E2E_DATABASE_URL);
   knexCli('Migrate the browser-test database', ['migrate:latest'], databaseUrl);
-  knexCli('Seed the browser-test database', ['seed:run'], databaseUrl);
+  seedDemoData('Seed the browser-test database', databaseUrl);
   if (!fs.existsSync(path.join(ROOT, 'dist', 'index.html'))) {
     buildClient('Build the client');
   }

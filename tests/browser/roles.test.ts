@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { DEMO_USERS } from '../../seeds/data/demo-users.ts';
+import { DEMO_USERS } from '#seeds/data/demo-users.ts';
 import { openBrowser, signIn } from './helpers/browser.ts';
 
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!;

@@ -2,7 +2,7 @@ import { execFile } from 'node:child_process';
 import path from 'node:path';
 import { promisify } from 'node:util';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { DEMO_USERS } from '../../seeds/data/demo-users.ts';
+import { DEMO_USERS } from '#seeds/data/demo-users.ts';
 import { makeTestApp } from './helpers/test-app.ts';
 
 const run = promisify(execFile);
@@ -11,7 +11,7 @@ const root = path.resolve(import.meta.dirname, '..', '..');
 function seed(env: Record<string, string>) {
   return run(
     process.execPath,
-    ['--import', 'tsx', 'node_modules/knex/bin/cli.js', '--knexfile', 'knexfile.ts', 'seed:run'],
+    ['--import', 'tsx', 'scripts/seed-demo.ts'],
     { cwd: root, env: { ...process.env, DATABASE_URL: inject('databaseUrl'), ...env } },
   );
 }

@@ -2,9 +2,9 @@ import { Writable } from 'node:stream';
 import pino from 'pino';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { createApp } from '../../server/app.ts';
-import { loadConfig } from '../../server/config.ts';
-import { createDb, closeDb } from '../../server/db/knex.ts';
+import { createApp } from '#server/app.ts';
+import { loadConfig } from '#server/config.ts';
+import { createDb, closeDb } from '#server/db/knex.ts';
 import { makeTestApp } from './helpers/test-app.ts';
 
 describe('error answers', () => {

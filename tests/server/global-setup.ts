@@ -3,10 +3,10 @@
  * and migrates it (in a child process: knex loads .ts files only under the tsx loader).
  */
 import type { TestProject } from 'vitest/node';
-import { start } from '../../server/db/embedded-postgres.ts';
-import { ensureDatabase } from '../../server/db/database-admin.ts';
+import { start } from '#server/db/embedded-postgres.ts';
+import { ensureDatabase } from '#server/db/database-admin.ts';
 import { testDatabaseUrl } from './test-database.ts';
-import { knexCli } from '../../scripts/lib/run-step.ts';
+import { knexCli } from '#scripts/lib/run-step.ts';
 
 declare module 'vitest' {
   export interface ProvidedContext {

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import pino from 'pino';
 import request from 'supertest';
-import { createApp } from '../../server/app.ts';
-import { loadConfig } from '../../server/config.ts';
-import { createDb, closeDb } from '../../server/db/knex.ts';
+import { createApp } from '#server/app.ts';
+import { loadConfig } from '#server/config.ts';
+import { createDb, closeDb } from '#server/db/knex.ts';
 import { makeTestApp } from './helpers/test-app.ts';
 
 describe('GET /api/health', () => {

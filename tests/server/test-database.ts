@@ -1,5 +1,5 @@
-import { resolveDatabaseUrl, withDatabase } from '../../server/db/database-url.ts';
-import { TEST_DATABASE } from '../../server/db/embedded-postgres.ts';
+import { resolveDatabaseUrl, withDatabase } from '#server/db/database-url.ts';
+import { TEST_DATABASE } from '#server/db/embedded-postgres.ts';
 
 /**
  * The server tests' own database: TEST_DATABASE_URL when set; otherwise the database

@@ -1,6 +1,6 @@
 import type { Knex } from 'knex';
-import type { Role } from '../../../shared/auth/capabilities.ts';
-import type { User } from '../../../shared/schemas/users.ts';
+import type { Role } from '#shared/auth/capabilities.ts';
+import type { User } from '#shared/schemas/users.ts';
 
 interface UserRecord {
   id: string;
@@ -68,16 +68,31 @@ export const usersRepo = {
     return toUser(row);
   },
 
-  async update(db: Knex, id: string, changes: { role?: Role; active?: boolean }, now: Date): Promise<User | null> {
+  async update(db: Knex, id: string, changes: { role?: Role; active?: boolean; displayName?: string }, now: Date): Promise<User | null> {
     const [row] = await db('users')
       .where({ id })
-      .update({ ...changes, updated_at: now })
+      .update({
+        ...(changes.role !== undefined ? { role: changes.role } : {}),
+        ...(changes.active !== undefined ? { active: changes.active } : {}),
+        ...(changes.displayName !== undefined ? { display_name: changes.displayName } : {}),
+        updated_at: now,
+      })
       .returning(publicColumns);
     return row ? toUser(row) : null;
   },
 
   async setPassword(db: Knex, id: string, passwordHash: string, now: Date): Promise<void> {
     await db('users').where({ id }).update({ password_hash: passwordHash, updated_at: now });
+  },
+
+  /** Row-locks every active admin until the transaction ends (see the users service's update). */
+  async lockActiveAdmins(trx: Knex): Promise<void> {
+    await trx('users').select('id').where({ role: 'admin', active: true }).forUpdate();
+  },
+
+  async findIdByEmail(db: Knex, email: string): Promise<string | null> {
+    const row = await db('users').whereRaw('lower(email) = lower(?)', [email]).first('id');
+    return row ? row.id : null;
   },
 
   async countActiveAdmins(db: Knex): Promise<number> {

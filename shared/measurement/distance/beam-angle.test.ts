@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { fitEffectiveBeamAngle, type ProfileReading } from './beam-angle.ts';
 import { ledArrayIrradianceAt } from '../geometry/led-array.ts';
-import { mulberry32, normalFrom } from '../demo/prng.ts';
+import { mulberry32, normalFrom } from '#seeds/demo/prng.ts';
 
 const emitter = { widthCm: 30, heightCm: 40, pitchCm: 2.5 };
 

@@ -11,7 +11,7 @@
  * Our code finds the header and reads the cells; csv-parse splits the rows (table-records.ts).
  */
 import { issue, type ImportIssue } from './import-issue.ts';
-import { ProblemList } from './problem-list.ts';
+import { ProblemList } from './import-issue-list.ts';
 import { splitTextLines } from './text-lines.ts';
 import {
   detectDelimiter,

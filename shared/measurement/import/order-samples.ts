@@ -2,7 +2,7 @@
  * Puts samples in ascending wavelength order and drops repeated wavelengths, keeping the first
  * occurrence in the file (the repeat is reported with its own line).
  */
-import { ProblemList } from './problem-list.ts';
+import { ProblemList } from './import-issue-list.ts';
 
 export interface OrderedSamples {
   wavelengthNm: Float64Array;

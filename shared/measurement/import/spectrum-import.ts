@@ -21,7 +21,7 @@
  * the rows (table-records.ts).
  */
 import type { ImportIssue } from './import-issue.ts';
-import { ProblemList } from './problem-list.ts';
+import { ProblemList } from './import-issue-list.ts';
 import { splitTextLines } from './text-lines.ts';
 import { isBlankLine } from './delimited-fields.ts';
 import { readTableRecords } from './table-records.ts';

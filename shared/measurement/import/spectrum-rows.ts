@@ -3,7 +3,7 @@
  * csv-parse gave (see table-records.ts). Bad rows are counted and reported with their line;
  * nothing is thrown.
  */
-import { ProblemList } from './problem-list.ts';
+import { ProblemList } from './import-issue-list.ts';
 import { isMissingCell, looksLikeFormula } from './delimited-fields.ts';
 import { parseDecimalCell } from './parse-decimal.ts';
 import { isEmptyRecord, type TableRecords } from './table-records.ts';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { cornerViewFactor } from '../geometry/view-factor.ts';
 import { analyzePlane } from './analyze-plane.ts';
-import { gridPoints, lambertianPanelField, rangeCm } from './test-fields.ts';
+import { gridPoints, lambertianPanelField, rangeCm } from '#tests/support/plane-fields.ts';
 
 /** Exact half-width where the model falls to `fraction` of its centre value, by bisection. */
 function exactHalfWidthCm(f: (x: number, y: number) => number, fraction: number): number {

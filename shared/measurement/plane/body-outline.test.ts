@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { bodyOverlay } from './body-outline.ts';
 import { planeField } from './interpolate.ts';
 import { ringBoundsCm, ringContains, signedAreaCm2 } from './polygon.ts';
-import { gridPoints, rangeCm } from './test-fields.ts';
+import { gridPoints, rangeCm } from '#tests/support/plane-fields.ts';
 import { bodyZoneCoverage, zoneCoverage } from './zone-coverage.ts';
 
 const shareOf = (rows: ReturnType<typeof bodyZoneCoverage>, name: string) => rows.find((r) => r.name === name)?.shares[0];

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { planeField } from './interpolate.ts';
-import { gridPoints, rangeCm } from './test-fields.ts';
+import { gridPoints, rangeCm } from '#tests/support/plane-fields.ts';
 
 describe('planeField', () => {
   it('bilinear on a rectilinear grid reproduces a bilinear function exactly, any spacing', () => {

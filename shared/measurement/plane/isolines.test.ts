@@ -3,7 +3,7 @@ import { coverageMap } from './coverage-map.ts';
 import { planeField } from './interpolate.ts';
 import { isolines } from './isolines.ts';
 import { planeCoverage } from './plane-coverage.ts';
-import { gridPoints, lambertianPanelField, rangeCm } from './test-fields.ts';
+import { gridPoints, lambertianPanelField, rangeCm } from '#tests/support/plane-fields.ts';
 
 const allBounds = (rings: [number, number][][]) => {
   const pts = rings.flat();

@@ -4,12 +4,14 @@ import request from 'supertest';
 import { randomUUID } from 'node:crypto';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { createApp } from '../../../server/app.ts';
-import { loadConfig, type Config } from '../../../server/config.ts';
-import { createDb, closeDb, type DbHandles } from '../../../server/db/knex.ts';
-import { hashPassword } from '../../../server/auth/password.ts';
-import type { Mailer, MailMessage } from '../../../server/mail/mailer.ts';
-import type { Role } from '../../../shared/auth/capabilities.ts';
+import { createApp } from '#server/app.ts';
+import { loadConfig, type Config } from '#server/config.ts';
+import { createDb, closeDb, type DbHandles } from '#server/db/knex.ts';
+import { createSessionAuth } from '#server/auth/session-auth.ts';
+import { systemCaller } from '#server/core/caller.ts';
+import { createUsersService } from '#server/services/users-service.ts';
+import type { Mailer, MailMessage } from '#server/mail/mailer.ts';
+import type { Role } from '#shared/auth/capabilities.ts';
 
 /**
  * The real app on the real test database, listening on an ephemeral 127.0.0.1 port so the
@@ -32,13 +34,17 @@ export async function makeTestApp(overrides: Partial<Record<string, string>> = {
   return { app, db, sent, origin, api: () => request(origin), agent: () => request.agent(origin), close };
 }
 
+/**
+ * A staff account made through the users service (as the seed and the command line make them),
+ * so the audit rows are those of real use. The e-mail is stored as given.
+ */
 export async function insertUser(db: DbHandles, role: Role, opts: { email?: string; password?: string; active?: boolean } = {}) {
-  const id = randomUUID();
-  const email = opts.email ?? `${role}-${id.slice(0, 8)}@lab.test`;
+  const users = createUsersService({ db: db.knex, clock: { now: () => new Date() }, sessions: createSessionAuth(db.pool) });
+  const email = opts.email ?? `${role}-${randomUUID().slice(0, 8)}@lab.test`;
   const password = opts.password ?? `pw-${role}-long-enough`;
-  await db.knex('users').insert({
-    id, email, display_name: `${role} person`, role, active: opts.active ?? true, password_hash: await hashPassword(password),
-  });
+  const seed = systemCaller('seed');
+  const { id } = await users.create(seed, { email, displayName: `${role} person`, role, password });
+  if (opts.active === false) await users.update(seed, id, { active: false });
   return { id, email, password };
 }
 

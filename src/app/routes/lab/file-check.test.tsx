@@ -1,7 +1,7 @@
 import { screen, within } from '@testing-library/react';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { renderApp } from '../../../test/render-app.tsx';
-import { meAnswer, people, stubFetch } from '../../../test/fetch-stub.ts';
+import { renderApp } from '#src/test/render-app.tsx';
+import { meAnswer, people, stubFetch } from '#src/test/fetch-stub.ts';
 
 // jsdom's File has no arrayBuffer(); the page uses it, so read the bytes the older way here.
 beforeAll(() => {

@@ -1,7 +1,7 @@
-import { PageHeader } from '../../../components/page-header.tsx';
-import { MeterCheckSection } from '../../../features/file-check/components/meter-check-section.tsx';
-import { SpectrumCheckSection } from '../../../features/file-check/components/spectrum-check-section.tsx';
-import { RequireCapability } from '../../require-capability.tsx';
+import { PageHeader } from '#src/components/page-header.tsx';
+import { MeterCheckSection } from '#src/features/file-check/components/meter-check-section.tsx';
+import { SpectrumCheckSection } from '#src/features/file-check/components/spectrum-check-section.tsx';
+import { RequireCapability } from '#src/app/require-capability.tsx';
 
 /** Instrument files checked before upload, entirely in the browser (no loader: nothing to fetch). */
 export default function FileCheckRoute() {

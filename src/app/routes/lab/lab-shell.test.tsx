@@ -1,8 +1,8 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import type { SessionUser } from '../../../../shared/schemas/users.ts';
-import { renderApp } from '../../../test/render-app.tsx';
-import { meAnswer, people, stubFetch } from '../../../test/fetch-stub.ts';
+import type { SessionUser } from '#shared/schemas/users.ts';
+import { renderApp } from '#src/test/render-app.tsx';
+import { meAnswer, people, stubFetch } from '#src/test/fetch-stub.ts';
 
 async function labNavItems(user: SessionUser) {
   stubFetch({ 'GET /api/me': meAnswer(user) });

@@ -10,17 +10,17 @@ import {
   useRouteError,
   type LoaderFunctionArgs,
 } from 'react-router-dom';
-import { Alert } from '../../../components/alert.tsx';
-import { ErrorState } from '../../../components/error-state.tsx';
-import { MinimalShell } from '../../../components/minimal-shell.tsx';
-import { SkipLink } from '../../../components/skip-link.tsx';
-import { Spinner } from '../../../components/spinner.tsx';
-import { meQueryOptions, useMe } from '../../../features/auth/api/get-me.ts';
-import { useSignOut } from '../../../features/auth/api/sign-out.ts';
-import { LabHeader } from '../../../features/lab-home/components/lab-header.tsx';
-import { LabNav } from '../../../features/lab-home/components/lab-nav.tsx';
-import { useFocusMainOnNavigate } from '../../../hooks/use-focus-main-on-navigate.ts';
-import { isApiError } from '../../../lib/api-client.ts';
+import { Alert } from '#src/components/alert.tsx';
+import { ErrorState } from '#src/components/error-state.tsx';
+import { MinimalShell } from '#src/components/minimal-shell.tsx';
+import { SkipLink } from '#src/components/skip-link.tsx';
+import { Spinner } from '#src/components/spinner.tsx';
+import { meQueryOptions, useMe } from '#src/features/auth/api/get-me.ts';
+import { useSignOut } from '#src/features/auth/api/sign-out.ts';
+import { LabHeader } from '#src/features/lab-home/components/lab-header.tsx';
+import { LabNav } from '#src/features/lab-home/components/lab-nav.tsx';
+import { useFocusMainOnNavigate } from '#src/hooks/use-focus-main-on-navigate.ts';
+import { isApiError } from '#src/lib/api-client.ts';
 
 function signInPath(pathname: string, search: string): string {
   return `/lab/sign-in?next=${encodeURIComponent(pathname + search)}`;

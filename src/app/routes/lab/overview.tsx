@@ -1,6 +1,6 @@
-import { PageHeader } from '../../../components/page-header.tsx';
-import { useMe } from '../../../features/auth/api/get-me.ts';
-import { RoleOverview } from '../../../features/lab-home/components/role-overview.tsx';
+import { PageHeader } from '#src/components/page-header.tsx';
+import { useMe } from '#src/features/auth/api/get-me.ts';
+import { RoleOverview } from '#src/features/lab-home/components/role-overview.tsx';
 
 export default function OverviewRoute() {
   const { data } = useMe();

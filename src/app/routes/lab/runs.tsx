@@ -1,5 +1,5 @@
-import { NotYetBuilt } from '../../../components/not-yet-built.tsx';
-import { RequireCapability } from '../../require-capability.tsx';
+import { NotYetBuilt } from '#src/components/not-yet-built.tsx';
+import { RequireCapability } from '#src/app/require-capability.tsx';
 
 export default function RunsRoute() {
   return (

@@ -1,9 +1,9 @@
 import { useNavigate } from 'react-router-dom';
-import { Cautions } from '../../../components/cautions.tsx';
-import { MinimalShell } from '../../../components/minimal-shell.tsx';
-import { PageHeader } from '../../../components/page-header.tsx';
-import { SignInForm } from '../../../features/auth/components/sign-in-form.tsx';
-import { useSafeNext } from '../../../features/auth/hooks/use-safe-next.ts';
+import { Cautions } from '#src/components/cautions.tsx';
+import { MinimalShell } from '#src/components/minimal-shell.tsx';
+import { PageHeader } from '#src/components/page-header.tsx';
+import { SignInForm } from '#src/features/auth/components/sign-in-form.tsx';
+import { useSafeNext } from '#src/features/auth/hooks/use-safe-next.ts';
 
 export default function SignInRoute() {
   const navigate = useNavigate();

@@ -1,6 +1,6 @@
-import { PageHeader } from '../../../components/page-header.tsx';
-import { LabStatement } from '../../../features/public-site/components/lab-statement.tsx';
-import { LatestReports } from '../../../features/public-site/components/latest-reports.tsx';
+import { PageHeader } from '#src/components/page-header.tsx';
+import { LabStatement } from '#src/features/public-site/components/lab-statement.tsx';
+import { LatestReports } from '#src/features/public-site/components/latest-reports.tsx';
 
 export default function HomeRoute() {
   return (

@@ -1,8 +1,8 @@
 import { Outlet } from 'react-router-dom';
-import { SkipLink } from '../../../components/skip-link.tsx';
-import { PublicFooter } from '../../../features/public-site/components/public-footer.tsx';
-import { PublicHeader } from '../../../features/public-site/components/public-header.tsx';
-import { useFocusMainOnNavigate } from '../../../hooks/use-focus-main-on-navigate.ts';
+import { SkipLink } from '#src/components/skip-link.tsx';
+import { PublicFooter } from '#src/features/public-site/components/public-footer.tsx';
+import { PublicHeader } from '#src/features/public-site/components/public-header.tsx';
+import { useFocusMainOnNavigate } from '#src/hooks/use-focus-main-on-navigate.ts';
 
 export default function PublicLayout() {
   useFocusMainOnNavigate();

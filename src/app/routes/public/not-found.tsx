@@ -1,4 +1,4 @@
-import { NotFound } from '../../../components/not-found.tsx';
+import { NotFound } from '#src/components/not-found.tsx';
 
 export default function PublicNotFoundRoute() {
   return <NotFound />;

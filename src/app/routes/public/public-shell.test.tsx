@@ -1,7 +1,7 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { renderApp } from '../../../test/render-app.tsx';
-import { stubFetch } from '../../../test/fetch-stub.ts';
+import { renderApp } from '#src/test/render-app.tsx';
+import { stubFetch } from '#src/test/fetch-stub.ts';
 
 describe('public shell', () => {
   it('shows the main navigation, the staff link and the home page', async () => {

@@ -1,4 +1,4 @@
-import { NotYetBuilt } from '../../../components/not-yet-built.tsx';
+import { NotYetBuilt } from '#src/components/not-yet-built.tsx';
 
 export default function ReportsRoute() {
   return (

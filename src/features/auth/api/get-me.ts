@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { meResponseSchema, type MeResponse } from '../../../../shared/schemas/users.ts';
-import { api } from '../../../lib/api-client.ts';
+import { meResponseSchema, type MeResponse } from '#shared/schemas/users.ts';
+import { api } from '#src/lib/api-client.ts';
 
 export const meQueryKey = ['auth', 'me'] as const;
 

@@ -4,8 +4,8 @@ import {
   sessionUserSchema,
   type SessionUser,
   type SignInBody,
-} from '../../../../shared/schemas/users.ts';
-import { api } from '../../../lib/api-client.ts';
+} from '#shared/schemas/users.ts';
+import { api } from '#src/lib/api-client.ts';
 import { meQueryKey } from './get-me.ts';
 
 const signInResponseSchema = z.object({ user: sessionUserSchema });

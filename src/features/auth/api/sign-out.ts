@@ -1,5 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client.ts';
+import { api } from '#src/lib/api-client.ts';
 
 /** POST /api/auth/sign-out (204). The caller leaves the lab and clears the cache. */
 export function signOut(): Promise<void> {

@@ -1,7 +1,7 @@
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { renderApp } from '../../../test/render-app.tsx';
-import { errorAnswer, meAnswer, people, stubFetch } from '../../../test/fetch-stub.ts';
+import { renderApp } from '#src/test/render-app.tsx';
+import { errorAnswer, meAnswer, people, stubFetch } from '#src/test/fetch-stub.ts';
 import { safeNext } from '../hooks/use-safe-next.ts';
 
 async function fillAndSubmit(user: ReturnType<typeof renderApp>['user']) {

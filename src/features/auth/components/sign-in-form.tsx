@@ -4,12 +4,12 @@ import {
   signInBodySchema,
   type SessionUser,
   type SignInBody,
-} from '../../../../shared/schemas/users.ts';
-import { Alert } from '../../../components/alert.tsx';
-import { Button } from '../../../components/button.tsx';
-import { TextField } from '../../../components/text-field.tsx';
-import { isApiError } from '../../../lib/api-client.ts';
-import { minutesFromSeconds } from '../../../lib/format.ts';
+} from '#shared/schemas/users.ts';
+import { Alert } from '#src/components/alert.tsx';
+import { Button } from '#src/components/button.tsx';
+import { TextField } from '#src/components/text-field.tsx';
+import { isApiError } from '#src/lib/api-client.ts';
+import { minutesFromSeconds } from '#src/lib/format.ts';
 import { useSignIn } from '../api/sign-in.ts';
 
 export const INVALID_CREDENTIALS_MESSAGE = 'E-mail or password is not right.';

@@ -1,4 +1,4 @@
-import { cn } from '../../../lib/cn.ts';
+import { cn } from '#src/lib/cn.ts';
 
 /** Readable or rejected, said in words with a mark, not by colour alone. */
 export function CheckStatus({ ok }: { ok: boolean }) {

@@ -1,4 +1,4 @@
-import { Cautions } from '../../../components/cautions.tsx';
+import { Cautions } from '#src/components/cautions.tsx';
 
 /** Goes beside every block of figures on this page (product brief, "Cautions"). */
 export function MeasurementCautions() {

@@ -1,7 +1,7 @@
 import { useState } from 'react';
-import { Button } from '../../../components/button.tsx';
-import { Card } from '../../../components/card.tsx';
-import { TextField } from '../../../components/text-field.tsx';
+import { Button } from '#src/components/button.tsx';
+import { Card } from '#src/components/card.tsx';
+import { TextField } from '#src/components/text-field.tsx';
 import { useMeterCheck } from '../hooks/use-meter-check.ts';
 import type { MeterCheck } from '../utils/check-meter-readings.ts';
 import { formatBytes, formatLength } from '../utils/format-figures.ts';

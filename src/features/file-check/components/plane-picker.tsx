@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import { cn } from '../../../lib/cn.ts';
+import { cn } from '#src/lib/cn.ts';
 import { formatLength } from '../utils/format-figures.ts';
 
 /**

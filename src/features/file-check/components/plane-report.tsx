@@ -1,8 +1,8 @@
-import type { FootprintCm } from '../../../../shared/measurement/plane/uniformity.ts';
+import type { FootprintCm } from '#shared/measurement/plane/uniformity.ts';
 import type { PlaneFigures, PlaneMap } from '../utils/check-meter-readings.ts';
 import { formatLength } from '../utils/format-figures.ts';
-import { CoverageMapFigure } from './coverage-map-figure.tsx';
-import { PlaneFiguresTable, PlaneReadingsTable, SpreadWidthsTable } from './plane-tables.tsx';
+import { CoverageMapFigure } from '#src/components/figures/coverage-map-figure.tsx';
+import { PlaneFiguresTable, PlaneReadingsTable, SpreadWidthsTable } from '#src/components/figures/plane-tables.tsx';
 
 /** Everything about one plane: its map, its figures, and its readings as numbers. */
 export function PlaneReport({

@@ -1,5 +1,5 @@
-import { Button } from '../../../components/button.tsx';
-import { SelectField } from '../../../components/select-field.tsx';
+import { Button } from '#src/components/button.tsx';
+import { SelectField } from '#src/components/select-field.tsx';
 import { useSpectrumChecks, type SpectrumFileCheck } from '../hooks/use-spectrum-checks.ts';
 import { SPECTRAL_UNITS } from '../utils/check-spectrum.ts';
 import { prettyUnit } from '../utils/format-figures.ts';

@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
-import type { BandIrradiance } from '../../../../shared/measurement/spectral/band-irradiance.ts';
-import type { SpectrumSummary } from '../../../../shared/measurement/spectral/spectrum-summary.ts';
+import type { BandIrradiance } from '#shared/measurement/spectral/band-irradiance.ts';
+import type { SpectrumSummary } from '#shared/measurement/spectral/spectrum-summary.ts';
 import type { SpectrumCheck } from '../utils/check-spectrum.ts';
 import { formatCount, formatFigure, formatLength, formatPercent, prettyUnit, wm2ToMwCm2 } from '../utils/format-figures.ts';
-import { Irradiance } from './irradiance.tsx';
+import { Irradiance } from '#src/components/figures/irradiance.tsx';
 
 const BAND_LABELS: Record<string, string> = { red: 'Red', nir: 'Near-infrared' };
 

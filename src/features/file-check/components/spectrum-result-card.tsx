@@ -1,5 +1,5 @@
 import { lazy, Suspense, useId } from 'react';
-import { Card } from '../../../components/card.tsx';
+import { Card } from '#src/components/card.tsx';
 import type { SpectrumFileCheck } from '../hooks/use-spectrum-checks.ts';
 import { formatBytes } from '../utils/format-figures.ts';
 import { CheckStatus, ReadingNote } from './check-status.tsx';
@@ -7,7 +7,7 @@ import { IssueList } from './issue-list.tsx';
 import { EmissionPeaksTable, SpectrumFigures, UnitLine } from './spectrum-figures.tsx';
 
 // The chart library is most of this page's code: it loads with the first readable spectrum.
-const SpectrumChart = lazy(() => import('./spectrum-chart.tsx').then((m) => ({ default: m.SpectrumChart })));
+const SpectrumChart = lazy(() => import('#src/components/figures/spectrum-chart.tsx').then((m) => ({ default: m.SpectrumChart })));
 
 function Title({ name, sizeBytes, ok }: { name: string; sizeBytes: number; ok: boolean | null }) {
   return (

@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import type { FootprintCm } from '../../../../shared/measurement/plane/uniformity.ts';
+import type { FootprintCm } from '#shared/measurement/plane/uniformity.ts';
 import {
   checkMeterReadings,
   falloffFigures,

@@ -1,5 +1,5 @@
 import { useCallback, useRef, useState } from 'react';
-import type { DecodedText } from '../../../../shared/measurement/import/decode-text.ts';
+import type { DecodedText } from '#shared/measurement/import/decode-text.ts';
 import { decodeFileBytes } from '../utils/check-spectrum.ts';
 import { formatBytes } from '../utils/format-figures.ts';
 

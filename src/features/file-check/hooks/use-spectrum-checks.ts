@@ -1,5 +1,5 @@
 import { useMemo, useRef, useState } from 'react';
-import type { DecodedText } from '../../../../shared/measurement/import/decode-text.ts';
+import type { DecodedText } from '#shared/measurement/import/decode-text.ts';
 import { checkSpectrum, type SpectrumCheck } from '../utils/check-spectrum.ts';
 import { useReadFiles, type ReadFile } from './use-read-files.ts';
 

@@ -3,24 +3,24 @@
  * the upload would: import, then per plane the coverage map, isolines and scalar figures, and the
  * falloff with distance. Pure (no DOM). Values stay in mW/cm², the template's unit.
  */
-import type { DecodedText } from '../../../../shared/measurement/import/decode-text.ts';
-import type { ImportIssue } from '../../../../shared/measurement/import/import-issue.ts';
+import type { DecodedText } from '#shared/measurement/import/decode-text.ts';
+import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
 import {
   importMeterReadings,
   type MeterReading,
   type MeterReadingsImport,
-} from '../../../../shared/measurement/import/meter-readings-import.ts';
-import { analyzePlane, type PlaneAnalysis } from '../../../../shared/measurement/plane/analyze-plane.ts';
-import { coverageMap, type CoverageMap } from '../../../../shared/measurement/plane/coverage-map.ts';
-import { planeCoverage, type PlaneCoverage } from '../../../../shared/measurement/plane/plane-coverage.ts';
-import { groupPlanesByDistance } from '../../../../shared/measurement/plane/group-planes.ts';
-import type { PlanePoint } from '../../../../shared/measurement/plane/plane-points.ts';
-import type { FootprintCm } from '../../../../shared/measurement/plane/uniformity.ts';
+} from '#shared/measurement/import/meter-readings-import.ts';
+import { analyzePlane, type PlaneAnalysis } from '#shared/measurement/plane/analyze-plane.ts';
+import { coverageMap, type CoverageMap } from '#shared/measurement/plane/coverage-map.ts';
+import { planeCoverage, type PlaneCoverage } from '#shared/measurement/plane/plane-coverage.ts';
+import { groupPlanesByDistance } from '#shared/measurement/plane/group-planes.ts';
+import type { PlanePoint } from '#shared/measurement/plane/plane-points.ts';
+import type { FootprintCm } from '#shared/measurement/plane/uniformity.ts';
 import {
   falloffExponent,
   localFalloffExponents,
   type LocalFalloffExponent,
-} from '../../../../shared/measurement/distance/falloff.ts';
+} from '#shared/measurement/distance/falloff.ts';
 
 /** Most cells the drawn map gets per axis: enough to read, few enough for SVG to stay quick. */
 const MAX_DRAWN_CELLS = 120;

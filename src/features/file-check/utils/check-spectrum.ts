@@ -2,11 +2,11 @@
  * One spectrum file, checked as the upload would: decode the bytes, import, summarise.
  * Pure (no DOM), so it is tested without rendering.
  */
-import { decodeTextBytes, type DecodedText } from '../../../../shared/measurement/import/decode-text.ts';
-import type { ImportIssue } from '../../../../shared/measurement/import/import-issue.ts';
-import { importSpectrum, type SpectrumImport } from '../../../../shared/measurement/import/spectrum-import.ts';
-import { DEFAULT_BANDS } from '../../../../shared/measurement/spectral/band-list.ts';
-import { summariseSpectrum, type SpectrumSummary } from '../../../../shared/measurement/spectral/spectrum-summary.ts';
+import { decodeTextBytes, type DecodedText } from '#shared/measurement/import/decode-text.ts';
+import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
+import { importSpectrum, type SpectrumImport } from '#shared/measurement/import/spectrum-import.ts';
+import { DEFAULT_BANDS } from '#shared/measurement/spectral/band-list.ts';
+import { summariseSpectrum, type SpectrumSummary } from '#shared/measurement/spectral/spectrum-summary.ts';
 
 /** The five spectral units the importer knows, in its canonical spelling. */
 export const SPECTRAL_UNITS = ['W/m2/nm', 'mW/m2/nm', 'uW/cm2/nm', 'mW/cm2/nm', 'W/cm2/nm'] as const;

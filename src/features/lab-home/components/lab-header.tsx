@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
-import { ROLE_LABELS, type Role } from '../../../../shared/auth/capabilities.ts';
-import { Button } from '../../../components/button.tsx';
+import { ROLE_LABELS, type Role } from '#shared/auth/capabilities.ts';
+import { Button } from '#src/components/button.tsx';
 
 /** The staff shell's header: who is signed in, and the way out. */
 export function LabHeader({

@@ -1,6 +1,6 @@
 import { NavLink } from 'react-router-dom';
-import { can, type Capability, type Role } from '../../../../shared/auth/capabilities.ts';
-import { cn } from '../../../lib/cn.ts';
+import { can, type Capability, type Role } from '#shared/auth/capabilities.ts';
+import { cn } from '#src/lib/cn.ts';
 
 /** Lab sections and the capability each needs. The server enforces; this only hides. */
 export const LAB_SECTIONS: ReadonlyArray<{ to: string; label: string; capability: Capability; end?: boolean }> = [

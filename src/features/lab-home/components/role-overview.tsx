@@ -1,4 +1,4 @@
-import { ROLE_CAPABILITIES, ROLE_LABELS, type Capability, type Role } from '../../../../shared/auth/capabilities.ts';
+import { ROLE_CAPABILITIES, ROLE_LABELS, type Capability, type Role } from '#shared/auth/capabilities.ts';
 
 /** One sentence per capability, in the lab's words. */
 const CAPABILITY_TEXT: Record<Capability, string> = {

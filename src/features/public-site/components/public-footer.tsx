@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { Cautions } from '../../../components/cautions.tsx';
+import { Cautions } from '#src/components/cautions.tsx';
 
 export function PublicFooter() {
   return (

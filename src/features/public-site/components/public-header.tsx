@@ -1,5 +1,5 @@
 import { Link, NavLink } from 'react-router-dom';
-import { cn } from '../../../lib/cn.ts';
+import { cn } from '#src/lib/cn.ts';
 
 export const MAIN_NAV = [
   { to: '/reports', label: 'Reports' },

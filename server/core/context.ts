@@ -1,0 +1,26 @@
+import type { Logger } from 'pino';
+import type { Db } from '../db/knex.ts';
+import type { SessionAuth } from '../auth/session-auth.ts';
+import type { SignInLimiter } from '../auth/sign-in-limiter.ts';
+import type { Mailer } from '../mail/mailer.ts';
+
+export type { Caller, SystemLabel } from './caller.ts';
+
+export interface Clock {
+  now(): Date;
+}
+
+export const systemClock: Clock = { now: () => new Date() };
+
+/**
+ * What services may receive: the database handle and the app's collaborators. Each service
+ * asks only for the ones it uses (a Pick of this), so scripts can build it with less.
+ */
+export interface ServiceDeps {
+  db: Db;
+  clock: Clock;
+  sessions: SessionAuth;
+  signInLimiter: SignInLimiter;
+  mailer: Mailer;
+  logger: Logger;
+}

@@ -1,0 +1,14 @@
+/**
+ * Every action the audit log records, by name. Services may write only these, so a report of
+ * "who did what" never meets a name it does not know.
+ */
+export const AUDIT_ACTIONS = [
+  'user.create',
+  'user.update',
+  'user.deactivate',
+  'user.reactivate',
+  'user.password_set',
+  'user.sign_in',
+  'user.sign_out',
+] as const;
+export type AuditAction = (typeof AUDIT_ACTIONS)[number];

@@ -1,0 +1,167 @@
+import { useId, useMemo } from 'react';
+import type { PlaneMap } from '#src/features/file-check/utils/check-meter-readings.ts';
+import { DATA_COLOURS } from './data-colors.ts';
+import { formatFigure, formatLength } from '#src/features/file-check/utils/format-figures.ts';
+import { cellPaths, mapFrame, niceTicks, placeLabel, polygonsPath, type LabelBox } from './map-geometry.ts';
+import { CoverageLegend, ISOLINE_DASH } from './coverage-legend.tsx';
+
+/**
+ * The coverage map of one plane as SVG: interpolated irradiance as coloured cells, the 80/50/25 %
+ * isolines outlined and labelled, the measured points as dots, cm axes. The same numbers are in
+ * the tables beside it, so the picture is never the only way to read them.
+ */
+export function CoverageMapFigure({ plane }: { plane: PlaneMap }) {
+  const titleId = useId();
+  const descId = useId();
+  const { coverage, drawn, points, distanceCm } = plane;
+  const bounds = coverage.field.bounds;
+  const peak = coverage.peak;
+
+  const drawing = useMemo(() => {
+    if (!bounds || !drawn || peak === null || bounds.maxXCm <= bounds.minXCm || bounds.maxYCm <= bounds.minYCm) return null;
+    const frame = mapFrame(bounds);
+    const taken: LabelBox[] = [];
+    const lines = coverage.isolines.map((iso) => ({
+      iso,
+      d: polygonsPath(iso.polygons, frame),
+      label: placeLabel(iso.polygons, frame, taken),
+    }));
+    return {
+      frame,
+      cells: cellPaths(drawn, peak, frame),
+      lines,
+      xTicks: niceTicks(bounds.minXCm, bounds.maxXCm),
+      yTicks: niceTicks(bounds.minYCm, bounds.maxYCm, 6),
+    };
+  }, [bounds, drawn, peak, coverage.isolines]);
+
+  if (!drawing || !bounds || peak === null) {
+    return (
+      <p className="font-sans text-sm text-ink-soft">
+        The readings at {formatLength(distanceCm)} cm lie on one line or one point, so there is no area to map. The
+        tables still give their figures.
+      </p>
+    );
+  }
+
+  const { frame, cells, lines, xTicks, yTicks } = drawing;
+  const { plot } = frame;
+  const areas = coverage.isolines
+    .filter((iso) => iso.levelPct !== null)
+    .map((iso) => `${iso.levelPct} %: ${formatFigure(iso.areaCm2)} cm²`)
+    .join('; ');
+
+  return (
+    <figure className="min-w-0 space-y-3">
+      {/* Scrolls sideways on a phone rather than shrinking the labels past reading. */}
+      <div
+        role="region"
+        aria-label={`Coverage map at ${formatLength(distanceCm)} cm, scrollable`}
+        tabIndex={0}
+        className="overflow-x-auto"
+        data-chart="coverage-map"
+      >
+        <svg
+          role="img"
+          aria-labelledby={`${titleId} ${descId}`}
+          viewBox={`0 0 ${frame.width.toFixed(0)} ${frame.height.toFixed(0)}`}
+          className="h-auto w-full min-w-[32rem]"
+          style={{ maxWidth: `${Math.ceil(frame.width)}px` }}
+          fontFamily="Inter, system-ui, sans-serif"
+        >
+          <title id={titleId}>Coverage map at {formatLength(distanceCm)} cm</title>
+          <desc id={descId}>
+            Interpolated irradiance over x {formatLength(bounds.minXCm)} to {formatLength(bounds.maxXCm)} cm and y{' '}
+            {formatLength(bounds.minYCm)} to {formatLength(bounds.maxYCm)} cm; peak {formatFigure(peak)} mW/cm². Area at
+            or above each share of the peak: {areas}. Dots mark the {points.length} measured points.
+          </desc>
+          <g shapeRendering="crispEdges">
+            {cells.map((c) => (
+              <path key={c.colour} d={c.d} fill={c.colour} />
+            ))}
+          </g>
+          <rect
+            x={plot.left}
+            y={plot.top}
+            width={plot.right - plot.left}
+            height={plot.bottom - plot.top}
+            fill="none"
+            stroke={DATA_COLOURS.inkMuted}
+          />
+          {lines.map(({ iso, d }) => (
+            <g key={iso.value} fill="none" fillRule="evenodd" strokeLinejoin="round">
+              {/* A paper-coloured halo keeps the ink line readable on dark and light cells alike. */}
+              <path d={d} stroke={DATA_COLOURS.paper} strokeWidth={4.5} strokeOpacity={0.9} />
+              <path d={d} stroke={DATA_COLOURS.ink} strokeWidth={1.75} strokeDasharray={ISOLINE_DASH[iso.levelPct ?? 0]} />
+            </g>
+          ))}
+          <g>
+            {points.map((p) => (
+              <circle
+                key={`${p.xCm}|${p.yCm}`}
+                cx={frame.px(p.xCm)}
+                cy={frame.py(p.yCm)}
+                r={2.6}
+                fill={DATA_COLOURS.ink}
+                stroke={DATA_COLOURS.paper}
+                strokeWidth={1}
+              />
+            ))}
+          </g>
+          {lines.map(({ iso, label }) =>
+            label ? (
+              <text
+                key={iso.value}
+                x={label.x}
+                y={label.y - 4}
+                textAnchor="middle"
+                fontSize={12}
+                fontWeight={600}
+                fill={DATA_COLOURS.ink}
+                stroke={DATA_COLOURS.paper}
+                strokeWidth={3.5}
+                paintOrder="stroke"
+              >
+                {iso.levelPct === null ? formatFigure(iso.value) : `${iso.levelPct} %`}
+              </text>
+            ) : null,
+          )}
+          <g fontSize={11} fill={DATA_COLOURS.inkMuted}>
+            {xTicks.map((t) => (
+              <g key={`x${t}`}>
+                <line x1={frame.px(t)} x2={frame.px(t)} y1={plot.bottom} y2={plot.bottom + 5} stroke={DATA_COLOURS.inkMuted} />
+                <text x={frame.px(t)} y={plot.bottom + 17} textAnchor="middle">
+                  {formatLength(t)}
+                </text>
+              </g>
+            ))}
+            {yTicks.map((t) => (
+              <g key={`y${t}`}>
+                <line x1={plot.left - 5} x2={plot.left} y1={frame.py(t)} y2={frame.py(t)} stroke={DATA_COLOURS.inkMuted} />
+                <text x={plot.left - 8} y={frame.py(t) + 4} textAnchor="end">
+                  {formatLength(t)}
+                </text>
+              </g>
+            ))}
+          </g>
+          <text x={(plot.left + plot.right) / 2} y={frame.height - 6} textAnchor="middle" fontSize={12} fill={DATA_COLOURS.ink}>
+            x (cm)
+          </text>
+          <text
+            transform={`translate(14 ${(plot.top + plot.bottom) / 2}) rotate(-90)`}
+            textAnchor="middle"
+            fontSize={12}
+            fill={DATA_COLOURS.ink}
+          >
+            y (cm)
+          </text>
+        </svg>
+      </div>
+      <CoverageLegend peak={peak} />
+      <figcaption className="font-sans text-xs text-ink-soft">
+        Irradiance interpolated between the measured points (nothing beyond them), seen facing the emitting surface:
+        x across, y up, origin at the centre of the emitting area.
+      </figcaption>
+    </figure>
+  );
+}

@@ -1,0 +1,12 @@
+import { palette } from '../../../tailwind.config.ts';
+
+/** Colours the chart library needs as literal values, taken from the one palette. */
+export const DATA_COLOURS = {
+  ink: palette.ink.DEFAULT,
+  inkMuted: palette.ink.muted,
+  rule: palette.rule.DEFAULT,
+  paper: palette.paper.raised,
+  signal: palette.signal.DEFAULT,
+  ember: palette.ember,
+  infra: palette.infra,
+} as const;

@@ -1,0 +1,183 @@
+import type { ReactNode } from 'react';
+import type { PlaneAnalysis } from '#shared/measurement/plane/analyze-plane.ts';
+import { mergeRepeatedPoints } from '#shared/measurement/plane/plane-points.ts';
+import type { FootprintCm } from '#shared/measurement/plane/uniformity.ts';
+import type { PlaneMap } from '#src/features/file-check/utils/check-meter-readings.ts';
+import { formatFigure, formatLength, formatPercent } from '#src/features/file-check/utils/format-figures.ts';
+import { Irradiance } from './irradiance.tsx';
+
+const th = 'bl-label border-b border-rule px-3 py-2 text-left align-bottom';
+const td = 'border-b border-rule px-3 py-2 text-sm align-top';
+
+function Row({ label, children }: { label: string; children: ReactNode }) {
+  return (
+    <tr>
+      <th scope="row" className="border-b border-rule px-3 py-2 text-left align-top font-sans text-sm font-semibold text-ink-soft">
+        {label}
+      </th>
+      <td className={td}>{children}</td>
+    </tr>
+  );
+}
+
+/** Peak, centre and, when an emitting area is given, the uniformity inside it. */
+export function PlaneFiguresTable({
+  analysis,
+  distanceCm,
+  footprint,
+}: {
+  analysis: PlaneAnalysis;
+  distanceCm: number;
+  footprint: FootprintCm | undefined;
+}) {
+  const u = analysis.footprint;
+  return (
+    <table className="w-full border-collapse">
+      <caption className="pb-2 text-left font-sans text-sm font-semibold text-ink">
+        Plane at {formatLength(distanceCm)} cm
+      </caption>
+      <tbody>
+        <Row label="Measured positions">{analysis.points}</Row>
+        <Row label="Peak">{analysis.peak === null ? '—' : <Irradiance mwCm2={analysis.peak} />}</Row>
+        <Row label="Centre (x 0, y 0)">
+          {analysis.center === null ? <span className="text-ink-muted">not measured</span> : <Irradiance mwCm2={analysis.center} />}
+        </Row>
+        {footprint && u ? (
+          <>
+            <Row label={`Readings inside ${formatLength(footprint.widthCm)} × ${formatLength(footprint.heightCm)} cm`}>
+              {u.points}
+            </Row>
+            <Row label="Minimum / mean (U₀)">{u.minOverMean === null ? '—' : formatFigure(u.minOverMean)}</Row>
+            <Row label="Minimum / maximum">{u.minOverMax === null ? '—' : formatFigure(u.minOverMax)}</Row>
+            <Row label="Coefficient of variation">{u.cv === null ? '—' : formatPercent(u.cv)}</Row>
+            <Row label="Non-uniformity (max − min) / (max + min)">
+              {u.nonUniformityPct === null ? '—' : `${formatFigure(u.nonUniformityPct)} %`}
+            </Row>
+          </>
+        ) : (
+          <Row label="Uniformity over the emitting area">
+            <span className="text-ink-muted">Give the emitting area (W × H) above to see it.</span>
+          </Row>
+        )}
+      </tbody>
+    </table>
+  );
+}
+
+/** Per level: the spread width along the centre row and the area at or above the level. */
+export function SpreadWidthsTable({ analysis, plane }: { analysis: PlaneAnalysis; plane: PlaneMap }) {
+  const row = analysis.spreadRowYCm;
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full border-collapse">
+        <caption className="pb-2 text-left font-sans text-sm font-semibold text-ink">
+          Spread widths and areas at {formatLength(plane.distanceCm)} cm
+        </caption>
+        <thead>
+          <tr>
+            <th scope="col" className={th}>Level</th>
+            <th scope="col" className={th}>Threshold</th>
+            <th scope="col" className={th}>
+              Spread width{row === null ? '' : ` along y = ${formatLength(row)} cm`}
+            </th>
+            <th scope="col" className={th}>Area at or above</th>
+          </tr>
+        </thead>
+        <tbody>
+          {analysis.spreadWidths.map((w) => {
+            const index = plane.coverage.isolines.findIndex((iso) => iso.levelPct === w.pct);
+            const iso = index >= 0 ? plane.coverage.isolines[index] : null;
+            return (
+              <tr key={w.pct}>
+                <th scope="row" className="border-b border-rule px-3 py-2 text-left align-top font-sans text-sm font-semibold">
+                  {w.pct} % of peak
+                </th>
+                <td className={`${td} whitespace-nowrap`}>{formatFigure(w.threshold)} mW/cm²</td>
+                <td className={td}>
+                  {w.leftCm === null || w.rightCm === null ? (
+                    <span className="text-ink-muted">0 cm: no reading on this row reaches it</span>
+                  ) : (
+                    <>
+                      <span className="font-semibold">
+                        {w.atEdge ? '≥ ' : ''}
+                        {formatLength(w.widthCm)} cm
+                      </span>{' '}
+                      <span className="font-sans text-xs text-ink-muted">
+                        (x {formatLength(w.leftCm)} to {formatLength(w.rightCm)} cm)
+                      </span>
+                      {analysis.widthAtEdge.includes(w.pct) ? (
+                        <p className="font-sans text-xs text-warn">
+                          Reached the edge of the grid: the region goes on past the last reading, so the true width is
+                          larger.
+                        </p>
+                      ) : null}
+                    </>
+                  )}
+                </td>
+                <td className={td}>
+                  {iso === null ? (
+                    '—'
+                  ) : (
+                    <>
+                      <span className="font-semibold">
+                        {plane.isolineAtEdge[index] ? '≥ ' : ''}
+                        {formatFigure(iso.areaCm2)} cm²
+                      </span>
+                      {plane.isolineAtEdge[index] ? (
+                        <p className="font-sans text-xs text-warn">Reaches the edge of the grid: at least this much.</p>
+                      ) : null}
+                    </>
+                  )}
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+/** The measured readings of a plane laid out as on the bench: rows by y (top = highest), columns by x. */
+export function PlaneReadingsTable({ plane }: { plane: PlaneMap }) {
+  const merged = mergeRepeatedPoints(plane.points);
+  const xs = [...new Set(merged.map((p) => p.xCm))].sort((a, b) => a - b);
+  const ys = [...new Set(merged.map((p) => p.yCm))].sort((a, b) => b - a);
+  const at = new Map(merged.map((p) => [`${p.xCm}|${p.yCm}`, p.value]));
+  return (
+    <div role="region" aria-label={`Readings at ${formatLength(plane.distanceCm)} cm`} tabIndex={0} className="overflow-x-auto">
+      <table className="border-collapse font-sans text-xs tabular-nums">
+        <caption className="pb-2 text-left text-sm font-semibold text-ink">
+          Readings at {formatLength(plane.distanceCm)} cm, mW/cm² (rows: y, columns: x, in cm)
+        </caption>
+        <thead>
+          <tr>
+            <th scope="col" className="px-2 py-1 text-right text-ink-soft">y \ x</th>
+            {xs.map((x) => (
+              <th key={x} scope="col" className="border-b border-rule px-2 py-1 text-right">
+                {formatLength(x)}
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {ys.map((y) => (
+            <tr key={y}>
+              <th scope="row" className="border-r border-rule px-2 py-1 text-right">
+                {formatLength(y)}
+              </th>
+              {xs.map((x) => {
+                const v = at.get(`${x}|${y}`);
+                return (
+                  <td key={x} className="px-2 py-1 text-right">
+                    {v === undefined ? <span className="text-ink-muted">—</span> : formatFigure(v)}
+                  </td>
+                );
+              })}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
