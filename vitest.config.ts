@@ -11,7 +11,7 @@ export default defineConfig({
       {
         test: {
           name: 'shared',
-          include: ['shared/**/*.test.ts', 'scripts/**/*.test.ts', 'seeds/**/*.test.ts'],
+          include: ['shared/**/*.test.ts', 'scripts/**/*.test.ts', 'seeds/**/*.test.ts', 'tests/unit/**/*.test.ts'],
           environment: 'node',
         },
       },

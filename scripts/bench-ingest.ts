@@ -1,15 +1,16 @@
 /**
  * Ingest benchmark: `npm run bench:ingest`.
- * Builds 405 spectrum exports in memory (3 planes × 135 grid points, 1,300 samples each, a few
- * LED lines plus noise, from a seeded generator), then times decoding + import + analysis
- * (bands, total, peak, photon flux, emission peaks) against a bare csv-parse pass over the same
- * bytes. Prints throughput, peak memory and whether the targets are met; never fails the build.
+ * Builds 405 spectrum exports in memory with the demo generator's export writer and random
+ * source (3 planes × 135 grid points, 1,300 samples each, a few LED lines plus noise), then times
+ * the shared check pipeline (decoding, import and analysis: bands, total, peak, photon flux,
+ * emission peaks) against a bare csv-parse pass over the same bytes. Prints throughput, peak memory and whether the targets are met; never fails the build.
  */
 import { parse } from 'csv-parse/sync';
-import { decodeTextBytes } from '#shared/measurement/import/decode-text.ts';
-import { importSpectrum } from '#shared/measurement/import/spectrum-import.ts';
+import { checkSpectrumFile } from '#shared/measurement/check/check-spectrum-file.ts';
 import { DEFAULT_BANDS } from '#shared/measurement/spectral/band-list.ts';
-import { summariseSpectrum } from '#shared/measurement/spectral/spectrum-summary.ts';
+import { DEMO_INSTRUMENTS } from '#seeds/demo/catalog.ts';
+import { formatSpectrumExport } from '#seeds/demo/export-formats.ts';
+import { mulberry32, normalFrom } from '#seeds/demo/prng.ts';
 
 const DISTANCES_CM = [15, 30, 60];
 const GRID_X = 15;
@@ -18,18 +19,8 @@ const SAMPLES = 1300;
 const TARGET_RATIO = 2.0;
 const TARGET_TOTAL_S = 3.0;
 const ROUNDS = 5;
-/** Metadata lines and the blank line before each export's header (see makeExport). */
-const PREAMBLE_LINES = 6;
-
-/** mulberry32: small seeded generator, so every run builds the same files. */
-function seeded(seed: number): () => number {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** The demo's array spectrometer, whose export carries dark and raw counts beside the irradiance. */
+const INSTRUMENT = DEMO_INSTRUMENTS.find((i) => i.format === 'tab-counts-descending')!;
 
 const LINES = [
   { nm: 630, sigma: 9, weight: 0.6 },
@@ -38,37 +29,53 @@ const LINES = [
   { nm: 850, sigma: 15, weight: 0.8 },
 ];
 
-function makeExport(random: () => number, distanceCm: number, x: number, y: number, serial: number): string {
-  const offCentre = Math.hypot(x - (GRID_X - 1) / 2, y - (GRID_Y - 1) / 2);
-  const scale = (4000 / (distanceCm + 10)) * Math.exp(-offCentre / 9); // µW/cm²/nm at the line peaks
-  const out: string[] = [
-    `Instrument\tDS-1 demo array spectroradiometer`,
-    `Serial\tDS1-${String(serial).padStart(6, '0')}`,
-    `Integration time (ms)\t${40 + Math.floor(random() * 200)}`,
-    `Distance (cm)\t${distanceCm}`,
-    `Position (cm)\t${x * 5};${y * 5}`,
-    '',
-    'Wavelength (nm)\tDark counts\tRaw counts\tIrradiance (uW/cm2/nm)',
-  ];
+/** One export in the demo's tab-separated shape: four LED lines plus noise, W/m²/nm. */
+function makeExport(uniform: () => number, gauss: () => number, distanceCm: number, x: number, y: number): string {
+  const offCenter = Math.hypot(x - (GRID_X - 1) / 2, y - (GRID_Y - 1) / 2);
+  const scale = (40 / (distanceCm + 10)) * Math.exp(-offCenter / 9); // W/m²/nm at the line peaks
   const step = (1050 - 340) / (SAMPLES - 1);
+  const wavelengthsNm: number[] = [];
+  const spectralWm2nm: number[] = [];
+  const darkCounts: number[] = [];
+  const rawCounts: number[] = [];
   for (let i = 0; i < SAMPLES; i++) {
     const nm = 340 + i * step;
     let e = 0;
     for (const line of LINES) e += line.weight * Math.exp(-((nm - line.nm) ** 2) / (2 * line.sigma ** 2));
-    e = e * scale + (random() - 0.5) * 0.02 * scale;
-    const dark = 900 + Math.floor(random() * 40);
-    out.push(`${nm.toFixed(3)}\t${dark}\t${dark + Math.max(0, Math.round(e * 12))}\t${e.toFixed(5)}`);
+    e = e * scale + 0.01 * scale * gauss();
+    const dark = 900 + Math.floor(uniform() * 40);
+    wavelengthsNm.push(nm);
+    spectralWm2nm.push(e);
+    darkCounts.push(dark);
+    rawCounts.push(dark + Math.max(0, Math.round(e * 1200)));
   }
-  return `${out.join('\r\n')}\r\n`;
+  return formatSpectrumExport('tab-counts-descending', {
+    instrument: INSTRUMENT,
+    wavelengthsNm,
+    spectralWm2nm,
+    distanceCm,
+    xCm: x * 5,
+    yCm: y * 5,
+    takenAt: '2025-03-04 09:30:00',
+    integrationMs: 40 + Math.floor(uniform() * 200),
+    darkCounts,
+    rawCounts,
+  });
 }
 
 function buildCorpus(): Uint8Array[] {
-  const random = seeded(20240312);
+  const uniform = mulberry32(20240312);
+  const gauss = normalFrom(uniform);
   const encoder = new TextEncoder();
   const files: Uint8Array[] = [];
-  let serial = 0;
-  for (const d of DISTANCES_CM) for (let x = 0; x < GRID_X; x++) for (let y = 0; y < GRID_Y; y++) files.push(encoder.encode(makeExport(random, d, x, y, ++serial)));
+  for (const d of DISTANCES_CM) for (let x = 0; x < GRID_X; x++) for (let y = 0; y < GRID_Y; y++) files.push(encoder.encode(makeExport(uniform, gauss, d, x, y)));
   return files;
+}
+
+/** Lines before the first data row (comment preamble and header), for the csv-parse baseline. */
+function preambleLines(file: Uint8Array): number {
+  const lines = new TextDecoder().decode(file.subarray(0, 4096)).split('\n');
+  return lines.findIndex((l) => /^\d/.test(l));
 }
 
 const peak = { rss: 0, heap: 0 };
@@ -83,22 +90,23 @@ function ingest(files: Uint8Array[]): number {
   for (let i = 0; i < files.length; i++) {
     const bytes = files[i];
     if (i % 25 === 0) sampleMemory();
-    const result = importSpectrum(decodeTextBytes(bytes).text);
-    if (!result.ok || !result.spectrum) throw new Error(`benchmark export rejected: ${JSON.stringify(result.issues[0])}`);
-    checksum += summariseSpectrum(result.spectrum, DEFAULT_BANDS).bands.red.wm2;
+    const check = checkSpectrumFile(bytes, { bands: DEFAULT_BANDS });
+    if (!check.summary) throw new Error(`benchmark export rejected: ${JSON.stringify(check.issues[0])}`);
+    checksum += check.summary.bands.red.wm2;
   }
   return checksum;
 }
 
 function bareCsvParse(files: Uint8Array[]): number {
   let rows = 0;
+  const skip = preambleLines(files[0]);
   for (const bytes of files) {
     const records = parse(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength), {
       delimiter: '\t',
       // csv-parse at its fastest: told where the table starts (the importer must find that
       // itself) and which record delimiters to expect. With relax_column_count over the
       // preamble instead, csv-parse 7 slows about 40-fold, which would flatter the ratio.
-      from_line: PREAMBLE_LINES + 1,
+      from_line: skip + 1,
       record_delimiter: ['\r\n', '\n'],
       skip_empty_lines: true,
     }) as string[][];

@@ -1,9 +1,20 @@
 /** What both bench CLI commands share: option parsing, reading a file, tidy numbers. */
 import { readFile, stat } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
+import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
+import { formatMegabytes, MAX_INSTRUMENT_FILE_BYTES } from '#shared/measurement/check/limits.ts';
 
-/** Larger files are neither a spectrum nor a bench grid. */
-export const MAX_FILE_BYTES = 64 * 1024 * 1024;
+/** What the command line adds to an importer message: its own way to act on it. */
+const CLI_HINTS: Readonly<Record<string, string>> = {
+  no_unit: 'On the command line, give it with --unit (e.g. --unit uW/cm2/nm).',
+  unit_not_spectral: 'On the command line, give the right one with --unit.',
+};
+
+/** The issue with the command line's hint appended, when it has one. */
+export function withCliHint(i: ImportIssue): ImportIssue {
+  const hint = CLI_HINTS[i.code];
+  return hint ? { ...i, message: `${i.message} ${hint}` } : i;
+}
 
 export type ParsedCommandLine<K extends string> =
   | { ok: true; values: Partial<Record<K, string>>; files: string[]; help: boolean }
@@ -31,8 +42,11 @@ export async function readInputFile(file: string, whatItIsNot: string): Promise<
   try {
     const info = await stat(file);
     if (!info.isFile()) return { code: 'file_unreadable', problem: `${file} is not a file.` };
-    if (info.size > MAX_FILE_BYTES) {
-      return { code: 'file_too_large', problem: `${file} is larger than ${MAX_FILE_BYTES / 1024 / 1024} MB; it is not ${whatItIsNot}.` };
+    if (info.size > MAX_INSTRUMENT_FILE_BYTES) {
+      return {
+        code: 'file_too_large',
+        problem: `${file} is larger than ${formatMegabytes(MAX_INSTRUMENT_FILE_BYTES)}; it is not ${whatItIsNot}.`,
+      };
     }
     return { bytes: await readFile(file) };
   } catch (err) {

@@ -5,10 +5,9 @@ import { promisify } from 'node:util';
 import { linearRegression, mean, min, max, standardDeviation } from 'simple-statistics';
 import { describe, expect, it } from 'vitest';
 import { panelViewFactor } from '#shared/measurement/geometry/view-factor.ts';
-import { buildGridReport, parseFootprintCm } from './grid-command.ts';
 
 const root = join(import.meta.dirname, '..', '..');
-const fixture = (name: string) => join('tests', 'fixtures', 'grids', name);
+const fixture = (name: string) => join('tests', 'fixtures', 'meter-readings', name);
 const run = promisify(execFile);
 
 /** Spawns the CLI as a tester would; never throws on a non-zero exit. */
@@ -148,9 +147,9 @@ describe('grid CLI refuses what it cannot use', () => {
   });
 
   it('a missing column: exit 1 with the header line', { timeout }, async () => {
-    const { code, stderr } = await grid(fixture('missing-column.csv'));
+    const { code, stderr } = await grid(fixture('missing-y-column.csv'));
     expect(code).toBe(1);
-    expect(stderr).toMatch(/missing-column\.csv:1: error missing_column/);
+    expect(stderr).toMatch(/missing-y-column\.csv:1: error missing_column/);
   });
 
   it('a missing file: exit 1', { timeout }, async () => {
@@ -167,41 +166,5 @@ describe('grid CLI refuses what it cannot use', () => {
     const none = await grid();
     expect(none.code).toBe(2);
     expect(none.stderr).toMatch(/usage:/);
-  });
-});
-
-describe('parseFootprintCm', () => {
-  it('accepts x, X and ×, with decimals and spaces', () => {
-    // W × H notation for sizes (common practice, no source).
-    expect(parseFootprintCm('34x80')).toEqual({ widthCm: 34, heightCm: 80 });
-    expect(parseFootprintCm('34X80')).toEqual({ widthCm: 34, heightCm: 80 });
-    expect(parseFootprintCm('34×80')).toEqual({ widthCm: 34, heightCm: 80 });
-    expect(parseFootprintCm(' 30.5 x 91.5 ')).toEqual({ widthCm: 30.5, heightCm: 91.5 });
-  });
-
-  it('refuses anything else', () => {
-    for (const s of ['34', 'x80', '34x', '0x80', '-34x80', '34*80', '34x80x2']) expect(parseFootprintCm(s)).toBeNull();
-  });
-});
-
-describe('buildGridReport', () => {
-  it('groups distances within float noise and sorts planes by distance', () => {
-    // Readings at one distance form one plane (common practice, no source).
-    const reading = (distanceCm: number, xCm: number, value: number, line: number) => ({
-      distanceCm,
-      xCm,
-      yCm: 0,
-      irradianceMwCm2: value,
-      line,
-    });
-    const report = buildGridReport('f', [
-      reading(30, 0, 20, 2),
-      reading(15, 0, 40, 3),
-      reading(30 + 1e-9, 2, 10, 4),
-      reading(15, 2, 30, 5),
-    ], null);
-    expect(report.planes.map((p) => [p.distanceCm, p.points])).toEqual([[15, 2], [30, 2]]);
-    // Two centres: exponent ln(40/20)/ln(30/15) = 1 (hand-computed).
-    expect(report.falloffExponent).toBeCloseTo(1, 9);
   });
 });

@@ -1,18 +1,18 @@
 /**
  * `analyze.ts grid [--footprint WxH] FILE`
- * Imports a meter-readings file (distance_cm, x_cm, y_cm, irradiance_mw_cm2) and prints one JSON
- * document: per plane (sorted by distance) the peak, centre, spread widths at 80/50/25 % and,
- * with --footprint, uniformity over the emitting area; plus the falloff exponent of the centres.
+ * Checks a meter-readings file (distance_cm, x_cm, y_cm, irradiance_mw_cm2) through the shared
+ * check pipeline and prints one JSON document: per plane (sorted by distance) the peak, centre,
+ * spread widths at 80/50/25 % and, with --footprint, uniformity over the emitting area; plus the
+ * falloff exponent of the centres.
  * Exit codes: 0 file usable (importer warnings go to stderr and into "issues"), 1 file not usable
  * (missing, unreadable, rejected by the importer, no readings), 2 bad command line.
  */
-import { parseCommandLine, readInputFile, tidy } from './cli-io.ts';
-import { decodeTextBytes } from '#shared/measurement/import/decode-text.ts';
+import { parseCommandLine, readInputFile, tidy, withCliHint } from './cli-io.ts';
 import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
-import { importMeterReadings, type MeterReading } from '#shared/measurement/import/meter-readings-import.ts';
-import { falloffExponent } from '#shared/measurement/distance/falloff.ts';
-import { analyzePlane } from '#shared/measurement/plane/analyze-plane.ts';
-import { groupPlanesByDistance } from '#shared/measurement/plane/group-planes.ts';
+import { checkMeterReadingsFile } from '#shared/measurement/check/check-meter-readings-file.ts';
+import type { GridAnalysis } from '#shared/measurement/check/analyze-grid.ts';
+import { parseFootprintCm } from '#shared/measurement/check/footprint-text.ts';
+import { STANDARD_LEVELS_PCT } from '#shared/measurement/plane/levels.ts';
 import type { FootprintCm } from '#shared/measurement/plane/uniformity.ts';
 
 export const GRID_USAGE =
@@ -26,7 +26,7 @@ export interface GridPlaneReport {
   points: number;
   peakMwCm2: number | null;
   centerMwCm2: number | null;
-  spreadWidthCm: { '80': number; '50': number; '25': number };
+  spreadWidthCm: Record<string, number>;
   widthAtEdge: number[];
   footprint: { minOverMean: number | null; minOverMax: number | null; cv: number | null; nonUniformityPct: number | null } | null;
 }
@@ -36,15 +36,6 @@ export interface GridReport {
   planes: GridPlaneReport[];
   falloffExponent: number | null;
   issues: ImportIssue[];
-}
-
-/** `34x80`, `34 X 80`, `34×80`, `34.5x80` → cm; null when malformed or not positive. */
-export function parseFootprintCm(text: string): FootprintCm | null {
-  const m = /^\s*(\d+(?:\.\d+)?)\s*[xX×]\s*(\d+(?:\.\d+)?)\s*$/.exec(text);
-  if (!m) return null;
-  const widthCm = Number(m[1]);
-  const heightCm = Number(m[2]);
-  return widthCm > 0 && heightCm > 0 ? { widthCm, heightCm } : null;
 }
 
 type ParsedArgs = { ok: true; help: boolean; file: string; footprint: FootprintCm | null } | { ok: false; message: string };
@@ -63,26 +54,18 @@ function parseOptions(args: string[]): ParsedArgs {
   return { ok: true, help: false, file: cl.files[0], footprint };
 }
 
-/** The JSON report for readings already imported (pure: no I/O). */
-export function buildGridReport(
-  file: string,
-  readings: readonly MeterReading[],
-  footprint: FootprintCm | null,
-  issues: ImportIssue[] = [],
-): GridReport {
-  const planes = groupPlanesByDistance(readings).map(({ distanceCm, readings: rs }): GridPlaneReport => {
-    const a = analyzePlane(
-      rs.map((r) => ({ xCm: r.xCm, yCm: r.yCm, value: r.irradianceMwCm2 })),
-      footprint ? { footprint, levelsPct: [80, 50, 25] } : { levelsPct: [80, 50, 25] },
-    );
-    const [w80, w50, w25] = a.spreadWidths.map((w) => tidy(w.widthCm));
+/** The JSON report of a grid already analysed (pure: no I/O). Keys keep their meaning across versions. */
+export function buildGridReport(file: string, grid: GridAnalysis, issues: ImportIssue[] = []): GridReport {
+  const planes = grid.planes.map(({ distanceCm, analysis: a }): GridPlaneReport => {
+    const spreadWidthCm: Record<string, number> = {};
+    for (const w of a.spreadWidths) spreadWidthCm[String(w.pct)] = tidy(w.widthCm);
     const fp = a.footprint;
     return {
       distanceCm: tidy(distanceCm),
       points: a.points,
       peakMwCm2: tidy(a.peak),
       centerMwCm2: tidy(a.center),
-      spreadWidthCm: { '80': w80, '50': w50, '25': w25 },
+      spreadWidthCm,
       widthAtEdge: a.widthAtEdge,
       footprint: fp
         ? {
@@ -94,8 +77,7 @@ export function buildGridReport(
         : null,
     };
   });
-  const exponent = falloffExponent(planes.map((p) => ({ distanceCm: p.distanceCm, center: p.centerMwCm2 })));
-  return { file, planes, falloffExponent: tidy(exponent), issues };
+  return { file, planes, falloffExponent: tidy(grid.falloff.exponent), issues };
 }
 
 function formatIssue(file: string, i: ImportIssue): string {
@@ -118,19 +100,17 @@ export async function runGridCommand(args: string[]): Promise<number> {
     process.stderr.write(`analyze grid: ${read.problem}\n`);
     return 1;
   }
-  const decoded = decodeTextBytes(read.bytes);
-  const result = importMeterReadings(decoded.text);
-  const issues = [...decoded.issues, ...result.issues];
+  const check = checkMeterReadingsFile(read.bytes, { footprint, levelsPct: STANDARD_LEVELS_PCT });
+  const issues = check.issues.map(withCliHint);
   for (const i of issues) process.stderr.write(formatIssue(file, i));
-  if (!result.ok) {
+  if (!check.result?.ok) {
     process.stderr.write(`analyze grid: ${file} cannot be used: the importer rejected it (see the issues above).\n`);
     return 1;
   }
-  if (result.readings.length === 0) {
+  if (check.result.readings.length === 0) {
     process.stderr.write(`analyze grid: ${file} has no readings.\n`);
     return 1;
   }
-  const report = buildGridReport(file, result.readings, footprint, issues);
-  process.stdout.write(`${JSON.stringify(report, null, 2)}\n`);
+  process.stdout.write(`${JSON.stringify(buildGridReport(file, check, issues), null, 2)}\n`);
   return 0;
 }

@@ -5,14 +5,13 @@
  * Exit codes: 0 every file usable, 1 any file not usable (still reported in the JSON),
  * 2 bad command line (unknown option or unit, malformed --bands, no file).
  */
-import { parseCommandLine, readInputFile, tidy } from './cli-io.ts';
-import { importSpectrum, KNOWN_UNITS_HINT } from '#shared/measurement/import/spectrum-import.ts';
-import { decodeTextBytes } from '#shared/measurement/import/decode-text.ts';
+import { parseCommandLine, readInputFile, tidy, withCliHint } from './cli-io.ts';
+import { KNOWN_UNITS_HINT } from '#shared/measurement/import/spectrum-import.ts';
+import { checkSpectrumFile } from '#shared/measurement/check/check-spectrum-file.ts';
 import { parseSpectralUnit } from '#shared/measurement/import/unit-spelling.ts';
 import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
 import { DEFAULT_BANDS, parseBandList } from '#shared/measurement/spectral/band-list.ts';
 import type { WavelengthBand } from '#shared/measurement/spectral/spectrum.ts';
-import { summariseSpectrum } from '#shared/measurement/spectral/spectrum-summary.ts';
 
 export const SPECTRUM_USAGE =
   'usage: analyze.ts spectrum [--bands NAME=LO-HI,...] [--unit UNIT] FILE...\n' +
@@ -66,17 +65,17 @@ function failed(file: string, issues: ImportIssue[], unit: string | null = null)
 async function reportFile(file: string, options: Options): Promise<FileReport> {
   const read = await readInputFile(file, 'a single spectrum');
   if ('problem' in read) return failed(file, [{ line: null, code: read.code, severity: 'error', message: read.problem }]);
-  const decoded = decodeTextBytes(read.bytes);
-  const result = importSpectrum(decoded.text, { unit: options.unit });
-  const issues = [...decoded.issues, ...result.issues];
-  if (!result.ok || result.spectrum === null) return failed(file, issues, result.unit);
-  const summary = summariseSpectrum(result.spectrum, options.bands);
+  // The command line's --unit overrides what the file says (the tester knows their instrument).
+  const check = checkSpectrumFile(read.bytes, { unit: options.unit, unitPolicy: 'override', bands: options.bands });
+  const issues = check.issues.map(withCliHint);
+  const summary = check.summary;
+  if (!summary || !check.result) return failed(file, issues, check.result?.unit ?? null);
   const bands: FileReport['bands'] = {};
   for (const [name, b] of Object.entries(summary.bands)) bands[name] = { loNm: b.loNm, hiNm: b.hiNm, wm2: tidy(b.wm2), partial: b.partial };
   return {
     file,
     ok: true,
-    unit: result.unit,
+    unit: check.result.unit,
     samples: summary.samples,
     rangeNm: summary.rangeNm,
     bands,

@@ -1,5 +1,7 @@
 /**
  * The demo scenario: fictional makers, models, units and instruments invented for Benchlight.
+ * Naming patterns are our own: instruments are named after birds, devices after landscape words
+ * with a plain-words category; serials are maker initials, year and a sequence number.
  * Any likeness to a real brand is accidental. Emission follows the LED-array model
  * (geometry/led-array.ts); the numbers are chosen to look like bench results, not copied.
  */
@@ -47,11 +49,11 @@ export interface DemoInstrument {
 }
 
 export const DEMO_INSTRUMENTS: readonly DemoInstrument[] = [
-  { id: 'tallis-sr105', kind: 'spectroradiometer', maker: 'Tallis Instruments', model: 'SR-105', serial: 'TI-SR105-0031', calibrationDate: '2025-02-11', rangeNm: { from: 350, to: 1050 }, format: 'comma-preamble' },
-  { id: 'hexmoor-sl9', kind: 'spectroradiometer', maker: 'Hexmoor Metrology', model: 'SpecLine 9', serial: 'HXM-SL9-0207', calibrationDate: '2024-11-28', rangeNm: { from: 350, to: 1050 }, format: 'semicolon-decimal-comma' },
-  { id: 'pellow-px700', kind: 'spectroradiometer', maker: 'Pellow Scientific', model: 'PX-700', serial: 'PX7-1180', calibrationDate: '2025-01-20', rangeNm: { from: 345, to: 1041 }, format: 'tab-counts-descending' },
-  { id: 'orrin-ol1050', kind: 'spectroradiometer', maker: 'Orrin Labs', model: 'OL-1050', serial: 'OL1050-0456', calibrationDate: '2024-12-03', rangeNm: { from: 350, to: 1050 }, format: 'comma-bom' },
-  { id: 'tallis-tp20', kind: 'irradiance meter', maker: 'Tallis Instruments', model: 'TP-20 thermopile', serial: 'TI-TP20-0112', calibrationDate: '2025-02-11', rangeNm: null, format: 'meter-readings' },
+  { id: 'tallis-wren', kind: 'spectroradiometer', maker: 'Tallis Instruments', model: 'Wren bench spectroradiometer', serial: 'TI-23-0031', calibrationDate: '2025-02-11', rangeNm: { from: 350, to: 1050 }, format: 'comma-preamble' },
+  { id: 'hexmoor-fieldfare', kind: 'spectroradiometer', maker: 'Hexmoor Metrology', model: 'Fieldfare array spectroradiometer', serial: 'HM-22-0207', calibrationDate: '2024-11-28', rangeNm: { from: 350, to: 1050 }, format: 'semicolon-decimal-comma' },
+  { id: 'pellow-linnet', kind: 'spectroradiometer', maker: 'Pellow Scientific', model: 'Linnet compact spectrometer', serial: 'PS-24-1180', calibrationDate: '2025-01-20', rangeNm: { from: 345, to: 1041 }, format: 'tab-counts-descending' },
+  { id: 'orrin-siskin', kind: 'spectroradiometer', maker: 'Orrin Labs', model: 'Siskin benchtop spectroradiometer', serial: 'OL-23-0456', calibrationDate: '2024-12-03', rangeNm: { from: 350, to: 1050 }, format: 'comma-bom' },
+  { id: 'tallis-stonechat', kind: 'irradiance meter', maker: 'Tallis Instruments', model: 'Stonechat thermopile meter', serial: 'TI-24-0112', calibrationDate: '2025-02-11', rangeNm: null, format: 'meter-readings' },
 ];
 
 const red = (peakNm: number, fwhmNm: number, powerFraction: number): DemoEmitter => ({
@@ -63,11 +65,11 @@ const nir = (peakNm: number, fwhmNm: number, powerFraction: number): DemoEmitter
 
 export const DEMO_UNITS: readonly DemoUnit[] = [
   {
-    id: 'corvane-tr1500',
+    id: 'corvane-fenwick',
     kind: 'body panel',
     maker: 'Corvane Photonics',
-    model: 'TR-1500 Torso Array',
-    serial: 'CVP-TR15-00417',
+    model: 'Fenwick torso panel',
+    serial: 'CVP-2024-00417',
     widthCm: 80,
     heightCm: 34,
     ledPitchCm: 2.8,
@@ -80,11 +82,11 @@ export const DEMO_UNITS: readonly DemoUnit[] = [
     claimedIrradiance: { mwCm2: 150, distanceCm: 0, wording: '> 150 mW/cm² at the surface' },
   },
   {
-    id: 'aldermoor-pd300',
+    id: 'aldermoor-tarn',
     kind: 'small panel',
     maker: 'Aldermoor Light Co.',
-    model: 'Pocket Duo 300',
-    serial: 'ALM-PD3-2291',
+    model: 'Tarn hand panel',
+    serial: 'ALM-2024-2291',
     widthCm: 30,
     heightCm: 20,
     ledPitchCm: 2.5,
@@ -97,11 +99,11 @@ export const DEMO_UNITS: readonly DemoUnit[] = [
     claimedIrradiance: { mwCm2: 75, distanceCm: 15, wording: '75 mW/cm² at 15 cm' },
   },
   {
-    id: 'quenby-dm60',
+    id: 'quenby-mere',
     kind: 'flexible mat',
     maker: 'Quenby Therapeutics',
-    model: 'Drapemat Q60',
-    serial: 'QT-DM60-0088',
+    model: 'Mere wrap mat',
+    serial: 'QT-2023-0088',
     widthCm: 60,
     heightCm: 30,
     ledPitchCm: 3,
@@ -114,11 +116,11 @@ export const DEMO_UNITS: readonly DemoUnit[] = [
     claimedIrradiance: { mwCm2: 40, distanceCm: 0, wording: '40 mW/cm² in contact' },
   },
   {
-    id: 'norrow-mf45',
+    id: 'norrow-holt',
     kind: 'half-body panel',
     maker: 'Norrow & Vale',
-    model: 'MidFrame 45',
-    serial: 'NV-MF45-1203',
+    model: 'Holt half-body panel',
+    serial: 'NV-2024-1203',
     widthCm: 45,
     heightCm: 30,
     ledPitchCm: 2.5,
@@ -134,13 +136,13 @@ export const DEMO_UNITS: readonly DemoUnit[] = [
 
 /** Which spectroradiometer measured which unit; the meter measured every unit. */
 export const DEMO_RUN_INSTRUMENT: Readonly<Record<string, string>> = {
-  'corvane-tr1500': 'tallis-sr105',
-  'aldermoor-pd300': 'hexmoor-sl9',
-  'quenby-dm60': 'pellow-px700',
-  'norrow-mf45': 'orrin-ol1050',
+  'corvane-fenwick': 'tallis-wren',
+  'aldermoor-tarn': 'hexmoor-fieldfare',
+  'quenby-mere': 'pellow-linnet',
+  'norrow-holt': 'orrin-siskin',
 };
 
-export const DEMO_METER_ID = 'tallis-tp20';
+export const DEMO_METER_ID = 'tallis-stonechat';
 
 /** The measuring grid shared by every demo run. */
 export const DEMO_GRID = {

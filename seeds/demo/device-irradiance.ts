@@ -33,23 +33,23 @@ export function emitterLedWeights(unit: DemoUnit, seed: number): number[][] {
   const bins = leds.map(() => Math.max(0.5, 1 + unit.ledBinSpread * gauss()));
   const k = unit.emitters.length;
   // Interleaved: colour index steps along a row and shifts by two per row (a diagonal pattern).
-  const colourOf = (i: number) => ((i % nx) + 2 * Math.floor(i / nx)) % k;
+  const colorOf = (i: number) => ((i % nx) + 2 * Math.floor(i / nx)) % k;
   return unit.emitters.map((emitter, e) => {
     if (unit.ledLayout === 'multi-chip') return bins.map((b) => b * emitter.powerFraction);
-    const count = leds.filter((_, i) => colourOf(i) === e).length;
+    const count = leds.filter((_, i) => colorOf(i) === e).length;
     // Fewer LEDs of a colour each run brighter so the colour keeps its share of the power.
-    return bins.map((b, i) => (colourOf(i) === e ? (b * emitter.powerFraction * leds.length) / count : 0));
+    return bins.map((b, i) => (colorOf(i) === e ? (b * emitter.powerFraction * leds.length) / count : 0));
   });
 }
 
 export function unitIrradiance(unit: DemoUnit, points: readonly ReceiverPoint[], seed: number): UnitIrradiance {
   const n = lambertianOrderFromFullAngleDeg(unit.modelFullAngleDeg);
   const weights = emitterLedWeights(unit, seed);
-  const centre: ReceiverPoint = { xCm: 0, yCm: 0, distanceCm: 15 };
-  const all = [centre, ...points];
+  const center: ReceiverPoint = { xCm: 0, yCm: 0, distanceCm: 15 };
+  const all = [center, ...points];
   const raw = weights.map((w) => makeArrayIrradianceEvaluator(geometryOf(unit), all, w)(n));
-  const centreTotal = raw.reduce((s, r) => s + r[0], 0);
-  const scale = unit.centerAt15CmMwCm2 / centreTotal;
+  const centerTotal = raw.reduce((s, r) => s + r[0], 0);
+  const scale = unit.centerAt15CmMwCm2 / centerTotal;
   const perEmitterMwCm2 = points.map((_, p) => raw.map((r) => r[p + 1] * scale));
   return {
     perEmitterMwCm2,

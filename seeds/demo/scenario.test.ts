@@ -12,7 +12,7 @@ import { bandIrradianceWm2, totalIrradianceWm2 } from '#shared/measurement/spect
 const { manifest, files } = buildDemoScenario(DEMO_SEED);
 const byPath = new Map(files.map((f) => [f.path, f.text]));
 const unitOf = (id: string) => manifest.units.find((u) => u.id === id)!;
-const centreFile = (runIndex: number, distanceCm: number) =>
+const centerFile = (runIndex: number, distanceCm: number) =>
   manifest.runs[runIndex].files.find((f) => f.distanceCm === distanceCm && f.xCm === 0 && f.yCm === 0)!;
 
 describe('demo scenario', () => {
@@ -41,7 +41,7 @@ describe('demo scenario', () => {
   });
 
   it('writes the byte-level features of each shape', () => {
-    const text = (i: number) => byPath.get(centreFile(i, 30).path)!;
+    const text = (i: number) => byPath.get(centerFile(i, 30).path)!;
     expect(text(0)).toMatch(/^Spectral irradiance export\n/);
     expect(text(0)).toContain('\nWavelength (nm),Irradiance (W/m2/nm)\n');
     expect(text(1)).toContain('\r\nWavelength [nm];Irradiance [\u00b5W/cm\u00b2/nm]\r\n');
@@ -98,14 +98,16 @@ describe('demo scenario', () => {
 describe('generated spectra through the importer and band integration', () => {
   it('imports every export shape with its unit and the model irradiance', () => {
     manifest.runs.forEach((run, i) => {
-      const result = importSpectrum(byPath.get(centreFile(i, 30).path)!);
+      const result = importSpectrum(byPath.get(centerFile(i, 30).path)!);
       expect(result.ok, `${run.format}: ${JSON.stringify({ ...result, spectrum: null })}`).toBe(true);
       expect(result.unit).toBe(FORMAT_UNIT_CANONICAL[run.format].canonical);
-      // Integrated spectrum vs model centre irradiance (1 mW/cm² = 10 W/m²); within 2 % for
-      // dark-offset residue and line wings outside the instrument's range (computed).
+      // Integrated spectrum vs model centre irradiance (1 mW/cm² = 10 W/m²). The residual dark
+      // offset (one draw per spectrum, σ = 4e-4 of the peak) integrates over the 700 nm range to
+      // σ ≈ 0.28 × peak/total ≈ 0.9 % of the total for the narrowest demo lines; line wings
+      // outside the range take ≤ 0.5 %. 3.5 % is about 4σ of that (computed from the noise model).
       const model = unitOf(run.unitId).generatingModel.centerMwCm2ByDistanceCm['30'];
       expect(totalIrradianceWm2(result.spectrum!) / 10 / model).toBeCloseTo(1, 1);
-      expect(Math.abs(totalIrradianceWm2(result.spectrum!) / 10 / model - 1)).toBeLessThan(0.02);
+      expect(Math.abs(totalIrradianceWm2(result.spectrum!) / 10 / model - 1)).toBeLessThan(0.035);
     });
   });
 
@@ -122,7 +124,7 @@ describe('generated spectra through the importer and band integration', () => {
     // so the interleaved colours average out to within about 1 %.
     manifest.runs.forEach((run, i) => {
       const unit = DEMO_UNITS.find((u) => u.id === run.unitId)!;
-      const result = importSpectrum(byPath.get(centreFile(i, 30).path)!);
+      const result = importSpectrum(byPath.get(centerFile(i, 30).path)!);
       const red = bandIrradianceWm2(result.spectrum!, { loNm: 600, hiNm: 700 }).wm2;
       const nir = bandIrradianceWm2(result.spectrum!, { loNm: 700, hiNm: 1100 }).wm2;
       const share = red / (red + nir);

@@ -136,10 +136,10 @@ export function buildDemoScenario(seed: number = DEMO_SEED): { manifest: DemoMan
     const runId = `${unit.id}-run1`;
     const measuredOn = `2025-03-${String(4 + unitIndex).padStart(2, '0')}`;
     const spectrumFiles: ManifestSpectrumFile[] = [];
-    const centre: Record<string, number> = {};
+    const center: Record<string, number> = {};
 
     points.forEach((p, index) => {
-      if (p.xCm === 0 && p.yCm === 0) centre[String(p.distanceCm)] = model.totalMwCm2[index];
+      if (p.xCm === 0 && p.yCm === 0) center[String(p.distanceCm)] = model.totalMwCm2[index];
       const gauss = normalFrom(mulberry32(hashSeed(`${seed}:${runId}:${p.distanceCm}:${p.xCm}:${p.yCm}`)));
       const clean = modelSpectrumWm2nm(shapes, model.perEmitterMwCm2[index]);
       const measured = addInstrumentNoise(clean, responsivity, gauss);
@@ -193,7 +193,7 @@ export function buildDemoScenario(seed: number = DEMO_SEED): { manifest: DemoMan
       ledMix: unit.emitters.map((e) => ({ peakNm: e.peakNm, fwhmNm: e.fwhmNm, powerFraction: e.powerFraction, band: bandOf(e.peakNm) })),
       claimedBeamAngle: unit.claimedBeamAngle,
       claimedIrradiance: unit.claimedIrradiance,
-      generatingModel: { fullAngleDeg: unit.modelFullAngleDeg, centerMwCm2ByDistanceCm: centre },
+      generatingModel: { fullAngleDeg: unit.modelFullAngleDeg, centerMwCm2ByDistanceCm: center },
     });
     runs.push({
       id: runId,

@@ -4,8 +4,6 @@ import type { SessionAuth } from '../auth/session-auth.ts';
 import type { SignInLimiter } from '../auth/sign-in-limiter.ts';
 import type { Mailer } from '../mail/mailer.ts';
 
-export type { Caller, SystemLabel } from './caller.ts';
-
 export interface Clock {
   now(): Date;
 }

@@ -1,4 +1,4 @@
-import type { Caller } from '../core/context.ts';
+import type { Caller } from '../core/caller.ts';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace

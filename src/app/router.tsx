@@ -11,6 +11,8 @@ import {
 import { ErrorState } from '../components/error-state.tsx';
 import { MinimalShell } from '../components/minimal-shell.tsx';
 import { Spinner } from '../components/spinner.tsx';
+import { LAB_SECTIONS, type LabSection } from './lab-sections.ts';
+import { RequireCapability } from './require-capability.tsx';
 
 /** What a lazily loaded route module may export. */
 interface RouteModule {
@@ -27,6 +29,19 @@ const convert =
     ...(clientLoader ? { loader: clientLoader(queryClient) } : {}),
     ...(ErrorBoundary ? { ErrorBoundary } : {}),
   });
+
+/** A lab section's page behind its capability: the same list drives the nav and this guard. */
+function guarded<T extends { Component: ComponentType }>(route: T, section: LabSection): T {
+  const Page = route.Component;
+  function GuardedPage() {
+    return (
+      <RequireCapability capability={section.capability} action={section.action}>
+        <Page />
+      </RequireCapability>
+    );
+  }
+  return { ...route, Component: GuardedPage };
+}
 
 function Root() {
   return (
@@ -82,12 +97,10 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           path: 'lab',
           lazy: () => import('./routes/lab/layout.tsx').then(c),
           children: [
-            { index: true, lazy: () => import('./routes/lab/overview.tsx').then(c) },
-            { path: 'runs', lazy: () => import('./routes/lab/runs.tsx').then(c) },
-            { path: 'check', lazy: () => import('./routes/lab/file-check.tsx').then(c) },
-            { path: 'catalog', lazy: () => import('./routes/lab/catalog.tsx').then(c) },
-            { path: 'review', lazy: () => import('./routes/lab/review.tsx').then(c) },
-            { path: 'admin/users', lazy: () => import('./routes/lab/users.tsx').then(c) },
+            ...LAB_SECTIONS.map((s) => ({
+              ...(s.path === '' ? { index: true as const } : { path: s.path }),
+              lazy: () => s.load().then((m) => guarded(c(m as RouteModule), s)),
+            })),
             { path: '*', lazy: () => import('./routes/lab/not-found.tsx').then(c) },
           ],
         },

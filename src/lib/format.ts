@@ -1,3 +1,9 @@
+/**
+ * Every number, date and unit the pages print goes through here. Unit conversions come from
+ * shared/measurement/units.ts (re-exported for the pages), so a figure is converted one way only.
+ */
+export { wm2ToMwCm2 } from '#shared/measurement/units.ts';
+
 const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 
 /** "3 Mar 2025"; the ISO string if it cannot be read. */
@@ -10,4 +16,55 @@ export function formatDate(iso: string): string {
 export function minutesFromSeconds(seconds: number): string {
   const m = Math.max(1, Math.ceil(seconds / 60));
   return `${m} ${m === 1 ? 'minute' : 'minutes'}`;
+}
+
+/**
+ * Figures keep about three significant digits: enough to compare with a report, without
+ * pretending to more precision than a bench gives.
+ */
+const grouping = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 0 });
+
+/** 3 significant digits for small values, whole numbers from 1000 up (grouped: 1,234). */
+export function formatFigure(value: number): string {
+  if (!Number.isFinite(value)) return '—';
+  const abs = Math.abs(value);
+  if (abs >= 1000) return grouping.format(value);
+  if (abs === 0) return '0';
+  const digits = abs >= 100 ? 0 : abs >= 10 ? 1 : abs >= 1 ? 2 : Math.min(6, 2 - Math.floor(Math.log10(abs)));
+  const text = value.toFixed(digits);
+  // "-0.00" says nothing a plain zero does not.
+  return Number(text) === 0 ? '0' : text;
+}
+
+/** Counts: whole numbers, grouped (1,401). */
+export function formatCount(value: number): string {
+  return grouping.format(value);
+}
+
+/** Axis ticks: as formatFigure, without trailing zeros (0.9, not 0.900). */
+export function formatTick(value: number): string {
+  const text = formatFigure(value);
+  return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
+}
+
+/** Lengths and wavelengths: one decimal, trailing ".0" dropped (630.5 nm, 40 cm). */
+export function formatLength(value: number): string {
+  if (!Number.isFinite(value)) return '—';
+  const text = value.toFixed(1);
+  return text.endsWith('.0') ? text.slice(0, -2) : text;
+}
+
+export function formatPercent(fraction: number): string {
+  return `${formatFigure(fraction * 100)} %`;
+}
+
+/** The importer's canonical spelling (`uW/cm2/nm`) as people write it (`µW/cm²/nm`). */
+export function prettyUnit(canonical: string): string {
+  return canonical.replace(/^u/, 'µ').replace(/m2/g, 'm²');
+}
+
+export function formatBytes(bytes: number): string {
+  if (bytes < 1024) return `${bytes} B`;
+  if (bytes < 1024 * 1024) return `${formatFigure(bytes / 1024)} kB`;
+  return `${formatFigure(bytes / (1024 * 1024))} MB`;
 }

@@ -8,8 +8,8 @@ import { buildDemoScenario, DEMO_SEED } from '#seeds/demo/scenario.ts';
 import { FORMAT_UNIT_CANONICAL } from '#seeds/demo/export-formats.ts';
 import { importSpectrum } from '#shared/measurement/import/spectrum-import.ts';
 import { DEFAULT_BANDS } from '#shared/measurement/spectral/band-list.ts';
-import { summariseSpectrum } from '#shared/measurement/spectral/spectrum-summary.ts';
-import { formatFigure, prettyUnit } from '#src/features/file-check/utils/format-figures.ts';
+import { summarizeSpectrum } from '#shared/measurement/spectral/spectrum-summary.ts';
+import { formatFigure, prettyUnit } from '#src/lib/format.ts';
 import { openBrowser, signIn } from './helpers/browser.ts';
 
 const tester = DEMO_USERS.find((u) => u.role === 'tester')!;
@@ -72,7 +72,7 @@ describe('File check in Chromium, with the demo exports', () => {
       expect(await rowValue(card, 'Unit in the file')).toBe(`${unit} (as the file states)`);
 
       // The page shows what the shared core computes from the same text…
-      const summary = summariseSpectrum(importSpectrum(s.text).spectrum!, DEFAULT_BANDS);
+      const summary = summarizeSpectrum(importSpectrum(s.text).spectrum!, DEFAULT_BANDS);
       expect(await rowValue(card, 'Red (600–700 nm)')).toContain(`${formatFigure(summary.bands.red.wm2 / 10)} mW/cm²`);
       expect(await rowValue(card, 'Near-infrared (700–1100 nm)')).toContain(`${formatFigure(summary.bands.nir.wm2 / 10)} mW/cm²`);
       // …and its total is the generating model's centre irradiance within the demo's noise (5 %).

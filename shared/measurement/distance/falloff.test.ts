@@ -5,7 +5,7 @@ import { cornerViewFactor } from '../geometry/view-factor.ts';
 // Howell's catalogue case B-3 (Siegel & Howell, Thermal Radiation Heat Transfer), checked
 // against its own published values in view-factor.test.ts.
 // Centre of an a×b rectangle: four corners of (a/2)×(b/2).
-const centreFactor = (a: number, b: number, c: number) => 4 * cornerViewFactor(a / 2, b / 2, c);
+const centerFactor = (a: number, b: number, c: number) => 4 * cornerViewFactor(a / 2, b / 2, c);
 
 describe('falloffExponent', () => {
   it('is exactly 2 for a point source', () => {
@@ -52,9 +52,9 @@ describe('falloffExponent', () => {
 describe('localFalloffExponents', () => {
   it('matches the B-3 configuration factors of a 0.3 × 0.9 m Lambertian panel', () => {
     // Howell's catalogue B-3 (Siegel & Howell): centre factors 0.693784 / 0.408164 / 0.172521 (computed).
-    expect(centreFactor(0.3, 0.9, 0.15)).toBeCloseTo(0.693784, 6);
-    expect(centreFactor(0.3, 0.9, 0.3)).toBeCloseTo(0.408164, 6);
-    expect(centreFactor(0.3, 0.9, 0.6)).toBeCloseTo(0.172521, 6);
+    expect(centerFactor(0.3, 0.9, 0.15)).toBeCloseTo(0.693784, 6);
+    expect(centerFactor(0.3, 0.9, 0.3)).toBeCloseTo(0.408164, 6);
+    expect(centerFactor(0.3, 0.9, 0.6)).toBeCloseTo(0.172521, 6);
     const planes = [
       { distanceCm: 30, center: 0.408164 },
       { distanceCm: 15, center: 0.693784 },
@@ -83,7 +83,7 @@ describe('localFalloffExponents', () => {
       [60, 1.483],
       [300, 1.967],
     ]) {
-      const planes = [d * 0.999, d * 1.001].map((x) => ({ distanceCm: x, center: centreFactor(30, 90, x) }));
+      const planes = [d * 0.999, d * 1.001].map((x) => ({ distanceCm: x, center: centerFactor(30, 90, x) }));
       expect(localFalloffExponents(planes)[0].exponent).toBeCloseTo(c, 3);
     }
   });
@@ -101,9 +101,9 @@ describe('localFalloffExponents', () => {
 
 describe('centerAtDistance', () => {
   const planes = [
-    { distanceCm: 15, center: centreFactor(30, 90, 15) },
-    { distanceCm: 30, center: centreFactor(30, 90, 30) },
-    { distanceCm: 60, center: centreFactor(30, 90, 60) },
+    { distanceCm: 15, center: centerFactor(30, 90, 15) },
+    { distanceCm: 30, center: centerFactor(30, 90, 30) },
+    { distanceCm: 60, center: centerFactor(30, 90, 60) },
   ];
 
   it('returns measured centres at measured distances', () => {
@@ -121,7 +121,7 @@ describe('centerAtDistance', () => {
     // Howell's catalogue B-3 at 20, 22.5 and 45 cm (computed): a panel's exponent rises with
     // distance, so ln E is concave in ln d and the chord under-reads (about 4 % mid-segment).
     for (const d of [20, 22.5, 45]) {
-      const ratio = centerAtDistance(planes, d)! / centreFactor(30, 90, d);
+      const ratio = centerAtDistance(planes, d)! / centerFactor(30, 90, d);
       expect(ratio).toBeLessThan(1);
       expect(ratio).toBeGreaterThan(0.95);
     }

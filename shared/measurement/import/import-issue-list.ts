@@ -4,7 +4,7 @@ import { issue, type ImportIssue, type ImportIssueSeverity } from './import-issu
  * Collects the problems found, keeping at most `perCodeLimit` located ones per code so that a file with a
  * thousand bad rows gives a readable list; the rest are counted in one closing warning.
  */
-export class ProblemList {
+export class ImportIssueList {
   readonly issues: ImportIssue[] = [];
   private readonly counts = new Map<string, number>();
 

@@ -19,7 +19,3 @@ export function issue(
 ): ImportIssue {
   return { line, code, severity, message };
 }
-
-export function hasErrors(issues: readonly ImportIssue[]): boolean {
-  return issues.some((i) => i.severity === 'error');
-}

@@ -11,7 +11,7 @@
  * Our code finds the header and reads the cells; csv-parse splits the rows (table-records.ts).
  */
 import { issue, type ImportIssue } from './import-issue.ts';
-import { ProblemList } from './import-issue-list.ts';
+import { ImportIssueList } from './import-issue-list.ts';
 import { splitTextLines } from './text-lines.ts';
 import {
   detectDelimiter,
@@ -42,7 +42,7 @@ type Column = 'distance_cm' | 'x_cm' | 'y_cm' | 'irradiance_mw_cm2';
 const COLUMNS: readonly Column[] = ['distance_cm', 'x_cm', 'y_cm', 'irradiance_mw_cm2'];
 
 /** `Distance (cm)`, `"x_cm"`, `Irradiance (mW/cm²)`, `Irradiance [mW/cm^2]`, `irradiance (mW cm-2)` → template names. */
-function normaliseHeaderName(cell: string): string {
+function normalizeHeaderName(cell: string): string {
   return cell
     .toLowerCase()
     .replace(/²/g, '2')
@@ -63,7 +63,7 @@ function findHeader(lines: string[]): Header | null {
     if (isBlankLine(lines[i])) continue;
     const delimiter = detectDelimiter(lines[i]);
     if (delimiter === null) continue;
-    const names = splitFields(lines[i], delimiter).map(normaliseHeaderName);
+    const names = splitFields(lines[i], delimiter).map(normalizeHeaderName);
     const columnIndex = new Map<Column, number>();
     names.forEach((name, index) => {
       const column = COLUMNS.find((c) => c === name);
@@ -107,7 +107,7 @@ export function importMeterReadings(text: string): MeterReadingsImport {
     ]);
   }
 
-  const issues = new ProblemList();
+  const issues = new ImportIssueList();
   const readings: MeterReading[] = [];
   const seenPoints = new Map<string, number>();
   let dataRows = 0;

@@ -2,7 +2,7 @@
  * Puts samples in ascending wavelength order and drops repeated wavelengths, keeping the first
  * occurrence in the file (the repeat is reported with its own line).
  */
-import { ProblemList } from './import-issue-list.ts';
+import { ImportIssueList } from './import-issue-list.ts';
 
 export interface OrderedSamples {
   wavelengthNm: Float64Array;
@@ -14,7 +14,7 @@ export function orderSamples(
   values: Float64Array,
   line: Int32Array,
   count: number,
-  issues: ProblemList,
+  issues: ImportIssueList,
 ): OrderedSamples {
   let ascending = true;
   let descending = true;

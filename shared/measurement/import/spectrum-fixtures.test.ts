@@ -4,7 +4,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { decodeTextBytes } from './decode-text.ts';
 import { importSpectrum } from './spectrum-import.ts';
-import { summariseSpectrum } from '../spectral/spectrum-summary.ts';
+import { summarizeSpectrum } from '../spectral/spectrum-summary.ts';
 import { DEFAULT_BANDS } from '../spectral/band-list.ts';
 
 const dir = fileURLToPath(new URL('../../../tests/fixtures/spectra', import.meta.url));
@@ -46,7 +46,7 @@ describe('spectrum fixture corpus', () => {
         expect(got.spectrum).toBeNull();
         return;
       }
-      const summary = summariseSpectrum(got.spectrum!, DEFAULT_BANDS);
+      const summary = summarizeSpectrum(got.spectrum!, DEFAULT_BANDS);
       const close = (value: number, target: number) =>
         expect(Math.abs(value - target)).toBeLessThanOrEqual((want.relTolerance ?? 1e-12) * Math.max(1, Math.abs(target)));
       expect(summary.samples).toBe(want.samples);

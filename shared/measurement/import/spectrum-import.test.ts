@@ -28,11 +28,26 @@ describe('importSpectrum', () => {
     expect(codes('Wavelength,Irradiance\n600,1\n601,1\n', 'furlongs')).toEqual([['unknown_unit', null]]);
   });
 
-  it('asks for --unit when no unit is anywhere', () => {
+  it('asks for a unit when none is anywhere, in words that name no caller\'s option', () => {
     const r = importSpectrum('Wavelength,Irradiance\n600,1\n601,1\n');
     expect(r.ok).toBe(false);
     expect(r.issues[0].code).toBe('no_unit');
-    expect(r.issues[0].message).toMatch(/--unit/);
+    // Each caller adds its own hint (the CLI its --unit, the page its unit picker).
+    expect(r.issues[0].message).not.toMatch(/--/);
+    expect(r.issues[0].message).toMatch(/Name it in the header/);
+  });
+
+  it("with unitPolicy 'if-missing' uses the caller's unit only when the file names none", () => {
+    // 1 mW/cm²/nm = 10 W/m²/nm (SI prefixes, BIPM SI Brochure 9th ed. 2019)
+    const named = importSpectrum('Wavelength (nm),Irradiance (W/m2/nm)\n600,1\n601,2\n', { unit: 'mW/cm2/nm', unitPolicy: 'if-missing' });
+    expect(named.unit).toBe('W/m2/nm');
+    expect(named.unitSource).toBe('file');
+    expect(named.issues).toEqual([]);
+    expect(named.spectrum!.irradianceWm2Nm).toEqual(Float64Array.of(1, 2));
+    const bare = importSpectrum('Wavelength (nm),Irradiance\n600,1\n601,2\n', { unit: 'mW/cm2/nm', unitPolicy: 'if-missing' });
+    expect(bare.unit).toBe('mW/cm2/nm');
+    expect(bare.unitSource).toBe('caller');
+    expect(bare.spectrum!.irradianceWm2Nm).toEqual(Float64Array.of(10, 20));
   });
 
   it('finds the unit on any preamble line, keeps reading metadata after it, and skips readings', () => {

@@ -12,16 +12,18 @@
  * (none in the header, the unit line or the preamble, and none given by the caller).
  * At most 20 located problems per code are listed; one closing warning counts the rest.
  *
- * Unit precedence: the caller's unit, then the irradiance column's header (or the unit line under
- * it), then the preamble (a `Units: …` line, else any line naming a spectral unit). Disagreements
- * are reported as warnings.
+ * Unit precedence: with the caller's unit and unitPolicy 'override' (the default), the caller's
+ * unit; otherwise the irradiance column's header (or the unit line under it), then the preamble
+ * (a `Units: …` line, else any line naming a spectral unit), and with unitPolicy 'if-missing' the
+ * caller's unit only when the file names none. Disagreements are reported as warnings.
+ * Messages are neutral: each caller (command line, page, worker) adds its own hint.
  * Negative irradiance values (noise around zero) are kept: integration is signed.
  *
  * Our code finds the table (preamble, header, delimiter) and reads the cells; csv-parse splits
  * the rows (table-records.ts).
  */
 import type { ImportIssue } from './import-issue.ts';
-import { ProblemList } from './import-issue-list.ts';
+import { ImportIssueList } from './import-issue-list.ts';
 import { splitTextLines } from './text-lines.ts';
 import { isBlankLine } from './delimited-fields.ts';
 import { readTableRecords } from './table-records.ts';
@@ -46,25 +48,32 @@ export interface SpectrumImport {
   spectrum: Spectrum | null;
   /** Canonical spelling of the unit the values were read in (e.g. `uW/cm2/nm`), or null. */
   unit: string | null;
+  /** Where that unit came from: the file itself or the caller's option. */
+  unitSource: 'file' | 'caller' | null;
   metadata: Record<string, string>;
   issues: ImportIssue[];
 }
 
+/** 'override': the caller's unit wins over the file's; 'if-missing': it applies only when the file names none. */
+export type UnitPolicy = 'override' | 'if-missing';
+
 export interface SpectrumImportOptions {
-  /** Unit of the irradiance column, in any spelling the importer recognises; overrides the file. */
+  /** Unit of the irradiance column, in any spelling the importer recognises. */
   unit?: string;
+  /** How the caller's unit relates to the file's (default 'override'). */
+  unitPolicy?: UnitPolicy;
 }
 
 export const KNOWN_UNITS_HINT = 'W/m2/nm, mW/m2/nm, uW/cm2/nm, mW/cm2/nm or W/cm2/nm';
 
 export function importSpectrum(text: string, options: SpectrumImportOptions = {}): SpectrumImport {
   const metadata: Record<string, string> = {};
-  const rejected = (issues: ImportIssue[]): SpectrumImport => ({ ok: false, spectrum: null, unit: null, metadata, issues });
+  const rejected = (issues: ImportIssue[]): SpectrumImport => ({ ok: false, spectrum: null, unit: null, unitSource: null, metadata, issues });
 
   const split = splitTextLines(text);
   if (split.lines === null) return rejected([split.issue]);
   const lines = split.lines;
-  const issues = new ProblemList();
+  const issues = new ImportIssueList();
 
   let callerUnit: SpectralIrradianceUnit | null = null;
   if (options.unit !== undefined && options.unit.trim() !== '') {
@@ -133,7 +142,8 @@ export function importSpectrum(text: string, options: SpectrumImportOptions = {}
     }
   }
 
-  const unit = resolveUnit(callerUnit, columnUnit, preambleUnit, columnName, issues);
+  const resolved = resolveUnit(callerUnit, options.unitPolicy ?? 'override', columnUnit, preambleUnit, columnName, issues);
+  const unit = resolved?.unit ?? null;
   const wavelengthHeader = table.header?.[table.wavelengthIndex] ?? '';
   const records = readTableRecords(split, table.dataStart, table.delimiter);
   const samples = readSpectrumRows(
@@ -161,12 +171,13 @@ export function importSpectrum(text: string, options: SpectrumImportOptions = {}
 
   const finished = issues.finish();
   if (unit === null || finished.some((i) => i.severity === 'error')) {
-    return { ok: false, spectrum: null, unit: unit?.canonical ?? null, metadata, issues: finished };
+    return { ok: false, spectrum: null, unit: unit?.canonical ?? null, unitSource: resolved?.source ?? null, metadata, issues: finished };
   }
   return {
     ok: true,
     spectrum: { wavelengthNm: ordered.wavelengthNm, irradianceWm2Nm: convertToWm2Nm(ordered.values, unit) },
     unit: unit.canonical,
+    unitSource: resolved!.source,
     metadata,
     issues: finished,
   };
@@ -205,11 +216,12 @@ function readPreamble(lines: readonly string[], end: number, metadata: Record<st
 
 function resolveUnit(
   callerUnit: SpectralIrradianceUnit | null,
+  policy: UnitPolicy,
   columnUnit: UnitSpelling | null,
   preambleUnit: UnitSpelling | null,
   columnName: string,
-  issues: ProblemList,
-): SpectralIrradianceUnit | null {
+  issues: ImportIssueList,
+): { unit: SpectralIrradianceUnit; source: 'file' | 'caller' } | null {
   const fileUnit = columnUnit ?? preambleUnit;
   if (columnUnit?.kind === 'spectral' && preambleUnit?.kind === 'spectral' && columnUnit.unit.canonical !== preambleUnit.unit.canonical) {
     issues.add(
@@ -219,19 +231,19 @@ function resolveUnit(
       `The header gives ${columnUnit.unit.canonical} but the preamble says ${preambleUnit.unit.canonical}; the header's unit was used.`,
     );
   }
-  if (callerUnit) {
+  if (callerUnit && (policy === 'override' || fileUnit === null)) {
     const named = fileUnit?.kind === 'spectral' ? fileUnit.unit.canonical : fileUnit?.kind === 'not_spectral' ? fileUnit.spelling : null;
     if (named !== null && named !== callerUnit.canonical) {
       issues.add(null, 'unit_overridden', 'warning', `The file names ${named}; the values were read as ${callerUnit.canonical} as asked.`);
     }
-    return callerUnit;
+    return { unit: callerUnit, source: 'caller' };
   }
   if (fileUnit === null) {
     issues.add(
       null,
       'no_unit',
       'error',
-      `No unit found for the irradiance column ${columnName}. Give one with --unit (e.g. --unit uW/cm2/nm) or name it in the header, e.g. "Irradiance (W/m2/nm)".`,
+      `No unit found for the irradiance column ${columnName}. Name it in the header, e.g. "Irradiance (W/m2/nm)", or say which unit the file was saved in (${KNOWN_UNITS_HINT}).`,
     );
     return null;
   }
@@ -241,14 +253,14 @@ function resolveUnit(
       null,
       'unit_not_spectral',
       'error',
-      `The irradiance column is in ${fileUnit.spelling}, which is ${why}: a spectrum needs spectral irradiance such as ${KNOWN_UNITS_HINT}. Give the right unit with --unit if the label is wrong.`,
+      `The irradiance column is in ${fileUnit.spelling}, which is ${why}: a spectrum needs spectral irradiance such as ${KNOWN_UNITS_HINT}. If the label is wrong, say which unit the file was saved in.`,
     );
     return null;
   }
-  return fileUnit.unit;
+  return { unit: fileUnit.unit, source: 'file' };
 }
 
-function checkRowCounts(samples: RawSamples, table: TableLocation, issues: ProblemList): void {
+function checkRowCounts(samples: RawSamples, table: TableLocation, issues: ImportIssueList): void {
   if (samples.dataRows === 0) {
     issues.add(null, 'no_data', 'error', 'The file has a header but no data rows under it.');
     return;

@@ -3,7 +3,7 @@
  * csv-parse gave (see table-records.ts). Bad rows are counted and reported with their line;
  * nothing is thrown.
  */
-import { ProblemList } from './import-issue-list.ts';
+import { ImportIssueList } from './import-issue-list.ts';
 import { isMissingCell, looksLikeFormula } from './delimited-fields.ts';
 import { parseDecimalCell } from './parse-decimal.ts';
 import { isEmptyRecord, type TableRecords } from './table-records.ts';
@@ -38,7 +38,7 @@ export const MIN_WAVELENGTH_NM = 200;
 export const MAX_WAVELENGTH_NM = 2500;
 
 /** `lines`: the file's lines, to quote a bad row in its message. */
-export function readSpectrumRows(table: TableRecords, lines: readonly string[], layout: RowLayout, issues: ProblemList): RawSamples {
+export function readSpectrumRows(table: TableRecords, lines: readonly string[], layout: RowLayout, issues: ImportIssueList): RawSamples {
   const { records, lines: lineOf } = table;
   const capacity = records.length;
   const wavelengthNm = new Float64Array(capacity);
@@ -101,7 +101,7 @@ export function readSpectrumRows(table: TableRecords, lines: readonly string[], 
   return out;
 }
 
-function reportBadRow(cells: readonly string[], text: string, line: number, layout: RowLayout, issues: ProblemList): void {
+function reportBadRow(cells: readonly string[], text: string, line: number, layout: RowLayout, issues: ImportIssueList): void {
   const wlCell = cells[layout.wavelengthIndex] ?? '';
   const eCell = cells[layout.irradianceIndex] ?? '';
   const isText = (cell: string) => cell.trim() !== '' && !isMissingCell(cell) && Number.isNaN(parseDecimalCell(cell, true));

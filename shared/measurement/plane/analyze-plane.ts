@@ -1,9 +1,8 @@
 import { mergeRepeatedPoints, peakValue, POSITION_TOLERANCE_CM, type PlanePoint } from './plane-points.ts';
 import { selectSpreadRow, spreadWidthAlongRow, type SpreadWidth } from './spread-width.ts';
+import { STANDARD_LEVELS_PCT } from './levels.ts';
 import { footprintUniformity, type FootprintCm, type UniformityStats } from './uniformity.ts';
 
-/** The trade's reporting levels, % of the plane's peak. */
-export const STANDARD_LEVELS_PCT = [80, 50, 25] as const;
 
 export interface PlaneAnalysisOptions {
   /** Emitting area, cm; without it there are no footprint figures. */
@@ -32,7 +31,7 @@ export function analyzePlane(points: readonly PlanePoint[], options: PlaneAnalys
   const merged = mergeRepeatedPoints(points);
   const levels = options.levelsPct ?? STANDARD_LEVELS_PCT;
   const peak = peakValue(merged);
-  const centrePoint = merged.find(
+  const centerPoint = merged.find(
     (p) => Math.abs(p.xCm) < POSITION_TOLERANCE_CM && Math.abs(p.yCm) < POSITION_TOLERANCE_CM,
   );
   const row = selectSpreadRow(merged);
@@ -40,7 +39,7 @@ export function analyzePlane(points: readonly PlanePoint[], options: PlaneAnalys
   return {
     points: merged.length,
     peak,
-    center: centrePoint ? centrePoint.value : null,
+    center: centerPoint ? centerPoint.value : null,
     spreadRowYCm: row ? row.yCm : null,
     spreadWidths,
     widthAtEdge: spreadWidths.filter((w) => w.atEdge).map((w) => w.pct),

@@ -46,7 +46,7 @@ export interface BodyOverlay {
 
 /** Heights as fractions of standing height, measured from the soles. */
 const H = {
-  headCentre: 0.935,
+  headCenter: 0.935,
   headHalf: 0.065,
   neckBase: 0.845,
   shoulderTop: 0.8,
@@ -80,7 +80,7 @@ const W = {
 } as const;
 
 /** Torso centre, fraction of height: the anchor placed at offsetCm. */
-const TORSO_CENTRE = (H.shoulderTop + H.hip) / 2;
+const TORSO_CENTER = (H.shoulderTop + H.hip) / 2;
 
 type Unit = [number, number]; // [fraction of shoulder width, fraction of height]
 
@@ -98,8 +98,8 @@ function ellipse(cx: number, cy: number, rx: number, ry: number, from = 0, to = 
 function rightHalf(legs: boolean): Unit[] {
   // Where the head ellipse meets the neck sides.
   const joinAngle = -Math.asin(Math.sqrt(1 - (W.neck / W.head) ** 2));
-  const head = ellipse(0, H.headCentre, W.head, H.headHalf, Math.PI / 2, joinAngle, 12);
-  head[0] = [0, H.headCentre + H.headHalf]; // exactly on the midline (cos π/2 is not 0 in floats)
+  const head = ellipse(0, H.headCenter, W.head, H.headHalf, Math.PI / 2, joinAngle, 12);
+  head[0] = [0, H.headCenter + H.headHalf]; // exactly on the midline (cos π/2 is not 0 in floats)
   const torso: Unit[] = [
     [W.neck, H.neckBase],
     [W.shoulder, H.shoulderTop],
@@ -173,7 +173,7 @@ export function bodyOverlay(options: BodyOverlayOptions = {}): BodyOverlay {
   if (!(shoulderWidthCm > 0 && heightCm > 0)) throw new RangeError('body size must be positive');
   const legs = options.legs ?? true;
   const { xCm: ox, yCm: oy } = options.offsetCm ?? { xCm: 0, yCm: 0 };
-  const place = ([u, v]: Unit): [number, number] => [ox + u * shoulderWidthCm, oy + (v - TORSO_CENTRE) * heightCm];
+  const place = ([u, v]: Unit): [number, number] => [ox + u * shoulderWidthCm, oy + (v - TORSO_CENTER) * heightCm];
   return {
     shoulderWidthCm,
     heightCm,

@@ -1,6 +1,7 @@
 import { coverageMap, type CoverageMap, type CoverageMapOptions } from './coverage-map.ts';
 import { planeField, type PlaneField } from './interpolate.ts';
 import { isolines, levelsFromPercent, type Isoline } from './isolines.ts';
+import { STANDARD_LEVELS_PCT } from './levels.ts';
 import { mergeRepeatedPoints, peakValue, type PlanePoint } from './plane-points.ts';
 
 export interface PlaneCoverageOptions extends CoverageMapOptions {
@@ -26,7 +27,7 @@ export function planeCoverage(points: readonly PlanePoint[], options: PlaneCover
   const map = coverageMap(field, options);
   if (!map || peak === null) return { peak, field, map, isolines: [] };
   const levels = [
-    ...levelsFromPercent(peak, options.levelsPct ?? [80, 50, 25]),
+    ...levelsFromPercent(peak, options.levelsPct ?? STANDARD_LEVELS_PCT),
     ...(options.absoluteLevels ?? []).map((value) => ({ levelPct: null, value })),
   ];
   return { peak, field, map, isolines: isolines(map, levels) };

@@ -15,7 +15,7 @@ export interface SpectrumSummary {
   peaks: EmissionPeak[];
 }
 
-export function summariseSpectrum(
+export function summarizeSpectrum(
   spectrum: SpectrumSamples,
   bands: Readonly<Record<string, WavelengthBand>>,
   peakOptions?: PeakOptions,

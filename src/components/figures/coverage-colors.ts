@@ -14,7 +14,7 @@ const STOPS: ReadonlyArray<readonly [number, readonly [number, number, number]]>
 const hex = (v: number) => Math.round(v).toString(16).padStart(2, '0');
 
 /** Colour for t in [0, 1] (clamped): 0 = no light, 1 = the plane's peak. */
-export function coverageColour(t: number): string {
+export function coverageColor(t: number): string {
   const u = Number.isFinite(t) ? Math.min(1, Math.max(0, t)) : 0;
   let k = 1;
   while (k < STOPS.length - 1 && u > STOPS[k][0]) k++;
@@ -27,5 +27,5 @@ export function coverageColour(t: number): string {
 /** Stops for an SVG gradient showing the whole ramp. */
 export const COVERAGE_GRADIENT_STOPS = [0, 0.1, 0.2, 0.33, 0.45, 0.55, 0.66, 0.8, 0.9, 1].map((t) => ({
   offset: t,
-  colour: coverageColour(t),
+  color: coverageColor(t),
 }));

@@ -1,7 +1,8 @@
 import { useId } from 'react';
+import { STANDARD_LEVELS_PCT } from '#shared/measurement/plane/levels.ts';
 import { COVERAGE_GRADIENT_STOPS } from './coverage-colors.ts';
-import { DATA_COLOURS } from './data-colors.ts';
-import { formatFigure } from '#src/features/file-check/utils/format-figures.ts';
+import { DATA_COLORS } from './data-colors.ts';
+import { formatFigure } from '#src/lib/format.ts';
 
 /** Line patterns tell the isolines apart without colour. */
 export const ISOLINE_DASH: Record<number, string | undefined> = { 80: undefined, 50: '7 4', 25: '2 3' };
@@ -21,15 +22,15 @@ export function CoverageLegend({ peak }: { peak: number }) {
           <defs>
             <linearGradient id={gradientId}>
               {COVERAGE_GRADIENT_STOPS.map((s) => (
-                <stop key={s.offset} offset={s.offset} stopColor={s.colour} />
+                <stop key={s.offset} offset={s.offset} stopColor={s.color} />
               ))}
             </linearGradient>
           </defs>
-          <rect x={pad} y={2} width={width} height={14} fill={`url(#${gradientId})`} stroke={DATA_COLOURS.inkMuted} strokeWidth={0.75} />
+          <rect x={pad} y={2} width={width} height={14} fill={`url(#${gradientId})`} stroke={DATA_COLORS.inkMuted} strokeWidth={0.75} />
           {LEGEND_TICKS.map((t) => (
             <g key={t}>
-              <line x1={pad + (t / 100) * width} x2={pad + (t / 100) * width} y1={16} y2={21} stroke={DATA_COLOURS.inkMuted} />
-              <text x={pad + (t / 100) * width} y={33} textAnchor="middle" fontSize={11} fill={DATA_COLOURS.ink}>
+              <line x1={pad + (t / 100) * width} x2={pad + (t / 100) * width} y1={16} y2={21} stroke={DATA_COLORS.inkMuted} />
+              <text x={pad + (t / 100) * width} y={33} textAnchor="middle" fontSize={11} fill={DATA_COLORS.ink}>
                 {t} %
               </text>
             </g>
@@ -40,17 +41,17 @@ export function CoverageLegend({ peak }: { peak: number }) {
         </p>
       </div>
       <ul className="space-y-1" aria-label="Key to the map's lines and dots">
-        {[80, 50, 25].map((pct) => (
+        {STANDARD_LEVELS_PCT.map((pct) => (
           <li key={pct} className="flex items-center gap-2">
             <svg width={36} height={10} aria-hidden="true">
-              <line x1={2} x2={34} y1={5} y2={5} stroke={DATA_COLOURS.ink} strokeWidth={1.75} strokeDasharray={ISOLINE_DASH[pct]} />
+              <line x1={2} x2={34} y1={5} y2={5} stroke={DATA_COLORS.ink} strokeWidth={1.75} strokeDasharray={ISOLINE_DASH[pct]} />
             </svg>
             Isoline at {pct} % of the peak ({formatFigure((pct / 100) * peak)} mW/cm²)
           </li>
         ))}
         <li className="flex items-center gap-2">
           <svg width={36} height={10} aria-hidden="true">
-            <circle cx={18} cy={5} r={2.6} fill={DATA_COLOURS.ink} />
+            <circle cx={18} cy={5} r={2.6} fill={DATA_COLORS.ink} />
           </svg>
           A measured point
         </li>

@@ -1,21 +1,34 @@
 import { useId, useMemo } from 'react';
-import type { PlaneMap } from '#src/features/file-check/utils/check-meter-readings.ts';
-import { DATA_COLOURS } from './data-colors.ts';
-import { formatFigure, formatLength } from '#src/features/file-check/utils/format-figures.ts';
+import type { GridPlane } from '#shared/measurement/check/analyze-grid.ts';
+import { coverageMap } from '#shared/measurement/plane/coverage-map.ts';
+import { DATA_COLORS } from './data-colors.ts';
+import { formatFigure, formatLength } from '#src/lib/format.ts';
 import { cellPaths, mapFrame, niceTicks, placeLabel, polygonsPath, type LabelBox } from './map-geometry.ts';
 import { CoverageLegend, ISOLINE_DASH } from './coverage-legend.tsx';
+
+/** Most cells the drawn map gets per axis: enough to read, few enough for SVG to stay quick. */
+const MAX_DRAWN_CELLS = 120;
+
+/** A coarser sampling of the plane's field, for drawing only (areas and isolines use the full map). */
+function drawnMap(plane: GridPlane) {
+  const bounds = plane.coverage.field.bounds;
+  if (!bounds) return null;
+  const extent = Math.max(bounds.maxXCm - bounds.minXCm, bounds.maxYCm - bounds.minYCm);
+  return coverageMap(plane.coverage.field, { stepCm: Math.max(0.5, extent / MAX_DRAWN_CELLS) });
+}
 
 /**
  * The coverage map of one plane as SVG: interpolated irradiance as coloured cells, the 80/50/25 %
  * isolines outlined and labelled, the measured points as dots, cm axes. The same numbers are in
  * the tables beside it, so the picture is never the only way to read them.
  */
-export function CoverageMapFigure({ plane }: { plane: PlaneMap }) {
+export function CoverageMapFigure({ plane }: { plane: GridPlane }) {
   const titleId = useId();
   const descId = useId();
-  const { coverage, drawn, points, distanceCm } = plane;
+  const { coverage, points, distanceCm } = plane;
   const bounds = coverage.field.bounds;
   const peak = coverage.peak;
+  const drawn = useMemo(() => drawnMap(plane), [plane]);
 
   const drawing = useMemo(() => {
     if (!bounds || !drawn || peak === null || bounds.maxXCm <= bounds.minXCm || bounds.maxYCm <= bounds.minYCm) return null;
@@ -77,7 +90,7 @@ export function CoverageMapFigure({ plane }: { plane: PlaneMap }) {
           </desc>
           <g shapeRendering="crispEdges">
             {cells.map((c) => (
-              <path key={c.colour} d={c.d} fill={c.colour} />
+              <path key={c.color} d={c.d} fill={c.color} />
             ))}
           </g>
           <rect
@@ -86,13 +99,13 @@ export function CoverageMapFigure({ plane }: { plane: PlaneMap }) {
             width={plot.right - plot.left}
             height={plot.bottom - plot.top}
             fill="none"
-            stroke={DATA_COLOURS.inkMuted}
+            stroke={DATA_COLORS.inkMuted}
           />
           {lines.map(({ iso, d }) => (
             <g key={iso.value} fill="none" fillRule="evenodd" strokeLinejoin="round">
               {/* A paper-coloured halo keeps the ink line readable on dark and light cells alike. */}
-              <path d={d} stroke={DATA_COLOURS.paper} strokeWidth={4.5} strokeOpacity={0.9} />
-              <path d={d} stroke={DATA_COLOURS.ink} strokeWidth={1.75} strokeDasharray={ISOLINE_DASH[iso.levelPct ?? 0]} />
+              <path d={d} stroke={DATA_COLORS.paper} strokeWidth={4.5} strokeOpacity={0.9} />
+              <path d={d} stroke={DATA_COLORS.ink} strokeWidth={1.75} strokeDasharray={ISOLINE_DASH[iso.levelPct ?? 0]} />
             </g>
           ))}
           <g>
@@ -102,8 +115,8 @@ export function CoverageMapFigure({ plane }: { plane: PlaneMap }) {
                 cx={frame.px(p.xCm)}
                 cy={frame.py(p.yCm)}
                 r={2.6}
-                fill={DATA_COLOURS.ink}
-                stroke={DATA_COLOURS.paper}
+                fill={DATA_COLORS.ink}
+                stroke={DATA_COLORS.paper}
                 strokeWidth={1}
               />
             ))}
@@ -117,8 +130,8 @@ export function CoverageMapFigure({ plane }: { plane: PlaneMap }) {
                 textAnchor="middle"
                 fontSize={12}
                 fontWeight={600}
-                fill={DATA_COLOURS.ink}
-                stroke={DATA_COLOURS.paper}
+                fill={DATA_COLORS.ink}
+                stroke={DATA_COLORS.paper}
                 strokeWidth={3.5}
                 paintOrder="stroke"
               >
@@ -126,10 +139,10 @@ export function CoverageMapFigure({ plane }: { plane: PlaneMap }) {
               </text>
             ) : null,
           )}
-          <g fontSize={11} fill={DATA_COLOURS.inkMuted}>
+          <g fontSize={11} fill={DATA_COLORS.inkMuted}>
             {xTicks.map((t) => (
               <g key={`x${t}`}>
-                <line x1={frame.px(t)} x2={frame.px(t)} y1={plot.bottom} y2={plot.bottom + 5} stroke={DATA_COLOURS.inkMuted} />
+                <line x1={frame.px(t)} x2={frame.px(t)} y1={plot.bottom} y2={plot.bottom + 5} stroke={DATA_COLORS.inkMuted} />
                 <text x={frame.px(t)} y={plot.bottom + 17} textAnchor="middle">
                   {formatLength(t)}
                 </text>
@@ -137,21 +150,21 @@ export function CoverageMapFigure({ plane }: { plane: PlaneMap }) {
             ))}
             {yTicks.map((t) => (
               <g key={`y${t}`}>
-                <line x1={plot.left - 5} x2={plot.left} y1={frame.py(t)} y2={frame.py(t)} stroke={DATA_COLOURS.inkMuted} />
+                <line x1={plot.left - 5} x2={plot.left} y1={frame.py(t)} y2={frame.py(t)} stroke={DATA_COLORS.inkMuted} />
                 <text x={plot.left - 8} y={frame.py(t) + 4} textAnchor="end">
                   {formatLength(t)}
                 </text>
               </g>
             ))}
           </g>
-          <text x={(plot.left + plot.right) / 2} y={frame.height - 6} textAnchor="middle" fontSize={12} fill={DATA_COLOURS.ink}>
+          <text x={(plot.left + plot.right) / 2} y={frame.height - 6} textAnchor="middle" fontSize={12} fill={DATA_COLORS.ink}>
             x (cm)
           </text>
           <text
             transform={`translate(14 ${(plot.top + plot.bottom) / 2}) rotate(-90)`}
             textAnchor="middle"
             fontSize={12}
-            fill={DATA_COLOURS.ink}
+            fill={DATA_COLORS.ink}
           >
             y (cm)
           </text>

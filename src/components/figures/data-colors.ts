@@ -1,7 +1,7 @@
-import { palette } from '../../../tailwind.config.ts';
+import { palette } from '#src/styles/palette.ts';
 
 /** Colours the chart library needs as literal values, taken from the one palette. */
-export const DATA_COLOURS = {
+export const DATA_COLORS = {
   ink: palette.ink.DEFAULT,
   inkMuted: palette.ink.muted,
   rule: palette.rule.DEFAULT,

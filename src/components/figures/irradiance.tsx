@@ -1,4 +1,4 @@
-import { formatFigure } from '#src/features/file-check/utils/format-figures.ts';
+import { formatFigure } from '#src/lib/format.ts';
 
 /** An irradiance in the trade's mW/cm², with the SI value (W/m²) in smaller text. */
 export function Irradiance({ mwCm2 }: { mwCm2: number }) {

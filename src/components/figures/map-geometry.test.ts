@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { coverageColour } from './coverage-colors.ts';
+import { coverageColor } from './coverage-colors.ts';
 import { cellPaths, mapFrame, niceTicks } from './map-geometry.ts';
 
 describe('coverage map geometry', () => {
@@ -23,7 +23,7 @@ describe('coverage map geometry', () => {
     const paths = cellPaths(map, 10, frame);
     // Two cells: one full (all corners 10), one with two finite corners (still 10).
     expect(paths).toHaveLength(1);
-    expect(paths[0].colour).toBe(coverageColour(1));
+    expect(paths[0].color).toBe(coverageColor(1));
     expect(paths[0].d.match(/M/g)).toHaveLength(2);
   });
 
@@ -34,7 +34,7 @@ describe('coverage map geometry', () => {
     };
     let previous = Infinity;
     for (let t = 0; t <= 1.0001; t += 0.05) {
-      const l = luminance(coverageColour(t));
+      const l = luminance(coverageColor(t));
       expect(l).toBeLessThan(previous);
       previous = l;
     }

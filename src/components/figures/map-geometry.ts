@@ -4,7 +4,7 @@
  */
 import type { CoverageMap } from '#shared/measurement/plane/coverage-map.ts';
 import type { RingCm } from '#shared/measurement/plane/polygon.ts';
-import { coverageColour } from './coverage-colors.ts';
+import { coverageColor } from './coverage-colors.ts';
 
 export interface BoundsCm {
   minXCm: number;
@@ -54,13 +54,13 @@ export function niceTicks(lo: number, hi: number, most = 9): number[] {
 }
 
 /** Colour steps of the drawn map: smooth to the eye, and one SVG path per step instead of one per cell. */
-const COLOUR_STEPS = 64;
+const COLOR_STEPS = 64;
 
 /**
  * The map's cells, each spanning four neighbouring nodes and coloured by their mean, grouped by
  * colour into paths. Cells stay inside the measured rectangle, as the isolines do.
  */
-export function cellPaths(map: CoverageMap, peak: number, frame: MapFrame): { colour: string; d: string }[] {
+export function cellPaths(map: CoverageMap, peak: number, frame: MapFrame): { color: string; d: string }[] {
   const groups = new Map<number, string[]>();
   const w = map.stepXCm * frame.scale;
   const h = map.stepYCm * frame.scale;
@@ -74,7 +74,7 @@ export function cellPaths(map: CoverageMap, peak: number, frame: MapFrame): { co
       ].filter(Number.isFinite);
       if (corners.length === 0) continue;
       const mean = corners.reduce((s, v) => s + v, 0) / corners.length;
-      const step = Math.round(Math.min(1, Math.max(0, peak > 0 ? mean / peak : 0)) * COLOUR_STEPS);
+      const step = Math.round(Math.min(1, Math.max(0, peak > 0 ? mean / peak : 0)) * COLOR_STEPS);
       const x = frame.px(map.x0Cm + i * map.stepXCm);
       const y = frame.py(map.y0Cm + (j + 1) * map.stepYCm);
       // A hair wider than the cell so anti-aliasing leaves no seams between neighbours.
@@ -85,7 +85,7 @@ export function cellPaths(map: CoverageMap, peak: number, frame: MapFrame): { co
   }
   return [...groups.entries()]
     .sort((a, b) => a[0] - b[0])
-    .map(([step, parts]) => ({ colour: coverageColour(step / COLOUR_STEPS), d: parts.join('') }));
+    .map(([step, parts]) => ({ color: coverageColor(step / COLOR_STEPS), d: parts.join('') }));
 }
 
 /** SVG path data for polygons [outer, ...holes] in cm. */

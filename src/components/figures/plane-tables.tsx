@@ -2,8 +2,8 @@ import type { ReactNode } from 'react';
 import type { PlaneAnalysis } from '#shared/measurement/plane/analyze-plane.ts';
 import { mergeRepeatedPoints } from '#shared/measurement/plane/plane-points.ts';
 import type { FootprintCm } from '#shared/measurement/plane/uniformity.ts';
-import type { PlaneMap } from '#src/features/file-check/utils/check-meter-readings.ts';
-import { formatFigure, formatLength, formatPercent } from '#src/features/file-check/utils/format-figures.ts';
+import type { GridPlane } from '#shared/measurement/check/analyze-grid.ts';
+import { formatFigure, formatLength, formatPercent } from '#src/lib/format.ts';
 import { Irradiance } from './irradiance.tsx';
 
 const th = 'bl-label border-b border-rule px-3 py-2 text-left align-bottom';
@@ -28,7 +28,7 @@ export function PlaneFiguresTable({
 }: {
   analysis: PlaneAnalysis;
   distanceCm: number;
-  footprint: FootprintCm | undefined;
+  footprint: FootprintCm | null;
 }) {
   const u = analysis.footprint;
   return (
@@ -65,7 +65,7 @@ export function PlaneFiguresTable({
 }
 
 /** Per level: the spread width along the centre row and the area at or above the level. */
-export function SpreadWidthsTable({ analysis, plane }: { analysis: PlaneAnalysis; plane: PlaneMap }) {
+export function SpreadWidthsTable({ analysis, plane }: { analysis: PlaneAnalysis; plane: GridPlane }) {
   const row = analysis.spreadRowYCm;
   return (
     <div className="overflow-x-auto">
@@ -139,7 +139,7 @@ export function SpreadWidthsTable({ analysis, plane }: { analysis: PlaneAnalysis
 }
 
 /** The measured readings of a plane laid out as on the bench: rows by y (top = highest), columns by x. */
-export function PlaneReadingsTable({ plane }: { plane: PlaneMap }) {
+export function PlaneReadingsTable({ plane }: { plane: GridPlane }) {
   const merged = mergeRepeatedPoints(plane.points);
   const xs = [...new Set(merged.map((p) => p.xCm))].sort((a, b) => a - b);
   const ys = [...new Set(merged.map((p) => p.yCm))].sort((a, b) => b - a);

@@ -2,16 +2,16 @@ import { useId, useMemo } from 'react';
 import { Area, AreaChart, CartesianGrid, ReferenceArea, Tooltip, XAxis, YAxis } from 'recharts';
 import type { Spectrum } from '#shared/measurement/import/spectrum-import.ts';
 import { DEFAULT_BANDS } from '#shared/measurement/spectral/band-list.ts';
-import { DATA_COLOURS } from './data-colors.ts';
+import { DATA_COLORS } from './data-colors.ts';
 import { downsampleMinMax } from './downsample.ts';
-import { formatCount, formatFigure, formatLength, formatTick } from '#src/features/file-check/utils/format-figures.ts';
+import { formatCount, formatFigure, formatLength, formatTick } from '#src/lib/format.ts';
 
 /** Enough points for a line a few hundred pixels wide; more only slows the page. */
 export const MAX_CHART_POINTS = 1500;
 
 const BANDS = [
-  { key: 'red', label: 'Red', colour: DATA_COLOURS.ember },
-  { key: 'nir', label: 'Near-infrared', colour: DATA_COLOURS.infra },
+  { key: 'red', label: 'Red', color: DATA_COLORS.ember },
+  { key: 'nir', label: 'Near-infrared', color: DATA_COLORS.infra },
 ] as const;
 
 function wavelengthTicks(lo: number, hi: number): number[] {
@@ -55,17 +55,17 @@ export function SpectrumChart({ spectrum, fileName }: { spectrum: Spectrum; file
           data={points}
           margin={{ top: 24, right: 16, bottom: 28, left: 24 }}
         >
-          <CartesianGrid stroke={DATA_COLOURS.rule} strokeDasharray="2 4" />
+          <CartesianGrid stroke={DATA_COLORS.rule} strokeDasharray="2 4" />
           {shaded.map((b) => (
             <ReferenceArea
               key={b.key}
               x1={b.from}
               x2={b.to}
-              fill={b.colour}
+              fill={b.color}
               fillOpacity={0.1}
-              stroke={b.colour}
+              stroke={b.color}
               strokeOpacity={0.35}
-              label={{ value: `${b.label} ${DEFAULT_BANDS[b.key].loNm}–${DEFAULT_BANDS[b.key].hiNm} nm`, position: 'top', fill: b.colour, fontSize: 12, fontWeight: 600 }}
+              label={{ value: `${b.label} ${DEFAULT_BANDS[b.key].loNm}–${DEFAULT_BANDS[b.key].hiNm} nm`, position: 'top', fill: b.color, fontSize: 12, fontWeight: 600 }}
             />
           ))}
           <XAxis
@@ -73,16 +73,16 @@ export function SpectrumChart({ spectrum, fileName }: { spectrum: Spectrum; file
             type="number"
             domain={[lo, hi]}
             ticks={wavelengthTicks(lo, hi)}
-            tick={{ fill: DATA_COLOURS.inkMuted, fontSize: 12 }}
-            stroke={DATA_COLOURS.inkMuted}
-            label={{ value: 'Wavelength (nm)', position: 'insideBottom', offset: -16, fill: DATA_COLOURS.ink, fontSize: 12 }}
+            tick={{ fill: DATA_COLORS.inkMuted, fontSize: 12 }}
+            stroke={DATA_COLORS.inkMuted}
+            label={{ value: 'Wavelength (nm)', position: 'insideBottom', offset: -16, fill: DATA_COLORS.ink, fontSize: 12 }}
           />
           <YAxis
             tickFormatter={(v: number) => formatTick(v)}
-            tick={{ fill: DATA_COLOURS.inkMuted, fontSize: 12 }}
-            stroke={DATA_COLOURS.inkMuted}
+            tick={{ fill: DATA_COLORS.inkMuted, fontSize: 12 }}
+            stroke={DATA_COLORS.inkMuted}
             width={56}
-            label={{ value: 'mW/cm²/nm', angle: -90, position: 'insideLeft', offset: -12, fill: DATA_COLOURS.ink, fontSize: 12 }}
+            label={{ value: 'mW/cm²/nm', angle: -90, position: 'insideLeft', offset: -12, fill: DATA_COLORS.ink, fontSize: 12 }}
           />
           <Tooltip
             formatter={(v) => [`${formatFigure(Number(v))} mW/cm²/nm`, 'Spectral irradiance']}
@@ -91,9 +91,9 @@ export function SpectrumChart({ spectrum, fileName }: { spectrum: Spectrum; file
           <Area
             type="linear"
             dataKey="value"
-            stroke={DATA_COLOURS.signal}
+            stroke={DATA_COLORS.signal}
             strokeWidth={1.5}
-            fill={DATA_COLOURS.signal}
+            fill={DATA_COLORS.signal}
             fillOpacity={0.12}
             isAnimationActive={false}
             dot={false}

@@ -1,12 +1,11 @@
 import { PageHeader } from '#src/components/page-header.tsx';
 import { MeterCheckSection } from '#src/features/file-check/components/meter-check-section.tsx';
 import { SpectrumCheckSection } from '#src/features/file-check/components/spectrum-check-section.tsx';
-import { RequireCapability } from '#src/app/require-capability.tsx';
 
 /** Instrument files checked before upload, entirely in the browser (no loader: nothing to fetch). */
 export default function FileCheckRoute() {
   return (
-    <RequireCapability capability="runs.upload" action="check instrument files">
+    <>
       <PageHeader
         eyebrow="Lab"
         title="File check"
@@ -27,6 +26,6 @@ export default function FileCheckRoute() {
         <hr className="border-rule" />
         <MeterCheckSection />
       </div>
-    </RequireCapability>
+    </>
   );
 }

@@ -8,7 +8,6 @@ import { CreateUserForm } from '#src/features/users/components/create-user-form.
 import { UsersTable } from '#src/features/users/components/users-table.tsx';
 import { usersQueryOptions, useUsers } from '#src/features/users/api/get-users.ts';
 import { meQueryOptions, useMe } from '#src/features/auth/api/get-me.ts';
-import { RequireCapability } from '#src/app/require-capability.tsx';
 
 /** Starts loading the list while the page's code arrives; only for roles that may see it. */
 export const clientLoader = (queryClient: QueryClient) => async () => {
@@ -43,10 +42,4 @@ function UsersPage() {
   );
 }
 
-export default function AdminUsersRoute() {
-  return (
-    <RequireCapability capability="users.manage" action="manage users">
-      <UsersPage />
-    </RequireCapability>
-  );
-}
+export default UsersPage;

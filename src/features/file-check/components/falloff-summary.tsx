@@ -1,5 +1,5 @@
-import type { FalloffFigures } from '../utils/check-meter-readings.ts';
-import { formatFigure, formatLength } from '../utils/format-figures.ts';
+import type { FalloffFigures } from '#shared/measurement/check/analyze-grid.ts';
+import { formatFigure, formatLength } from '#src/lib/format.ts';
 
 /** How the centre reading falls with distance, across the planes of the file. */
 export function FalloffSummary({ falloff, planes }: { falloff: FalloffFigures; planes: number }) {

@@ -3,8 +3,8 @@ import { Button } from '#src/components/button.tsx';
 import { Card } from '#src/components/card.tsx';
 import { TextField } from '#src/components/text-field.tsx';
 import { useMeterCheck } from '../hooks/use-meter-check.ts';
-import type { MeterCheck } from '../utils/check-meter-readings.ts';
-import { formatBytes, formatLength } from '../utils/format-figures.ts';
+import type { MeterReadingsFileCheck } from '#shared/measurement/check/check-meter-readings-file.ts';
+import { formatBytes, formatLength } from '#src/lib/format.ts';
 import { CheckStatus, ReadingNote } from './check-status.tsx';
 import { FalloffSummary } from './falloff-summary.tsx';
 import { FileDropZone } from './file-drop-zone.tsx';
@@ -13,18 +13,18 @@ import { MeasurementCautions } from './measurement-cautions.tsx';
 import { PlanePicker } from './plane-picker.tsx';
 import { PlaneReport } from './plane-report.tsx';
 
-function summarise(state: 'reading' | 'read' | 'failed' | null, check: MeterCheck | null): string {
+function summarize(state: 'reading' | 'read' | 'failed' | null, check: MeterReadingsFileCheck | null): string {
   if (state === null) return '';
   if (state === 'reading') return 'Reading the meter readings file…';
   if (state === 'failed' || !check) return 'The meter readings file could not be read.';
-  if (!check.result.ok) return 'Checked the meter readings file: rejected.';
+  if (!check.ok || !check.result) return 'Checked the meter readings file: rejected.';
   const planes = check.planes.map((p) => `${formatLength(p.distanceCm)} cm`).join(', ');
   return `Checked the meter readings file: ${check.result.readings.length} readings on ${check.planes.length} ${check.planes.length === 1 ? 'plane' : 'planes'} (${planes}).`;
 }
 
 export function MeterCheckSection() {
   const meter = useMeterCheck();
-  const { file, check, figures, falloff, footprint } = meter;
+  const { file, check, footprint } = meter;
   const [picked, setPicked] = useState<number | null>(null);
   const distances = check?.planes.map((p) => p.distanceCm) ?? [];
   // A new file may not hold the plane picked before: fall back to its first (nearest) plane.
@@ -69,7 +69,7 @@ export function MeterCheckSection() {
       </div>
       <div className="flex flex-wrap items-center justify-between gap-3">
         <p aria-live="polite" className="font-sans text-sm font-semibold text-ink">
-          {summarise(file?.state ?? null, check)}
+          {summarize(file?.state ?? null, check)}
         </p>
         {file ? (
           <Button variant="secondary" size="sm" onClick={meter.clear}>
@@ -85,7 +85,7 @@ export function MeterCheckSection() {
             <span className="flex flex-wrap items-center gap-x-3 gap-y-1">
               <span className="break-all">{file.name}</span>
               <span className="font-sans text-xs font-normal text-ink-muted">{formatBytes(file.sizeBytes)}</span>
-              {check ? <CheckStatus ok={check.result.ok} /> : file.state === 'failed' ? <CheckStatus ok={false} /> : null}
+              {check ? <CheckStatus ok={check.ok} /> : file.state === 'failed' ? <CheckStatus ok={false} /> : null}
             </span>
           }
         >
@@ -102,12 +102,12 @@ export function MeterCheckSection() {
         </Card>
       ) : null}
 
-      {check && check.result.ok && index >= 0 ? (
+      {check && check.ok && index >= 0 ? (
         <div className="space-y-8">
           <MeasurementCautions />
           <PlanePicker distancesCm={distances} value={distance!} onChange={setPicked} />
-          <PlaneReport plane={check.planes[index]} figures={figures[index]} footprint={footprint} />
-          {falloff ? <FalloffSummary falloff={falloff} planes={check.planes.length} /> : null}
+          <PlaneReport plane={check.planes[index]} footprint={footprint} />
+          <FalloffSummary falloff={check.falloff} planes={check.planes.length} />
         </div>
       ) : null}
     </section>

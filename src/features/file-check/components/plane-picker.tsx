@@ -1,6 +1,6 @@
 import { useId } from 'react';
 import { cn } from '#src/lib/cn.ts';
-import { formatLength } from '../utils/format-figures.ts';
+import { formatLength } from '#src/lib/format.ts';
 
 /**
  * Picks the plane by its distance. Native radio buttons: arrow keys move between planes and a

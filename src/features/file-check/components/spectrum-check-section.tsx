@@ -1,8 +1,8 @@
 import { Button } from '#src/components/button.tsx';
 import { SelectField } from '#src/components/select-field.tsx';
-import { useSpectrumChecks, type SpectrumFileCheck } from '../hooks/use-spectrum-checks.ts';
-import { SPECTRAL_UNITS } from '../utils/check-spectrum.ts';
-import { prettyUnit } from '../utils/format-figures.ts';
+import { useSpectrumChecks, type SpectrumFileItem } from '../hooks/use-spectrum-checks.ts';
+import { SPECTRAL_UNITS } from '../utils/page-checks.ts';
+import { prettyUnit } from '#src/lib/format.ts';
 import { FileDropZone } from './file-drop-zone.tsx';
 import { MeasurementCautions } from './measurement-cautions.tsx';
 import { SpectrumResultCard } from './spectrum-result-card.tsx';
@@ -15,18 +15,18 @@ const UNIT_OPTIONS = [
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
 /** One sentence for the live region: what is being read, and how the checks came out. */
-function summarise(items: readonly SpectrumFileCheck[]): string {
+function summarize(items: readonly SpectrumFileItem[]): string {
   if (items.length === 0) return '';
   const reading = items.filter((i) => i.file.state === 'reading').length;
   if (reading > 0) return `Reading ${plural(reading, 'file', 'files')}…`;
-  const readable = items.filter((i) => i.check?.result.ok).length;
+  const readable = items.filter((i) => i.check?.ok).length;
   const rejected = items.length - readable;
   return `Checked ${plural(items.length, 'spectrum file', 'spectrum files')}: ${readable} readable, ${rejected} rejected.`;
 }
 
 export function SpectrumCheckSection() {
   const { checks, add, clear, unitIfMissing, setUnitIfMissing } = useSpectrumChecks();
-  const anyFigures = checks.some((c) => c.check?.result.ok);
+  const anyFigures = checks.some((c) => c.check?.ok);
   return (
     <section aria-labelledby="spectrum-files-heading" className="space-y-6">
       <div className="max-w-measure">
@@ -55,7 +55,7 @@ export function SpectrumCheckSection() {
       </div>
       <div className="flex flex-wrap items-center justify-between gap-3">
         <p aria-live="polite" className="font-sans text-sm font-semibold text-ink">
-          {summarise(checks)}
+          {summarize(checks)}
         </p>
         {checks.length > 0 ? (
           <Button variant="secondary" size="sm" onClick={clear}>

@@ -1,13 +1,13 @@
 import type { ReactNode } from 'react';
 import type { BandIrradiance } from '#shared/measurement/spectral/band-irradiance.ts';
 import type { SpectrumSummary } from '#shared/measurement/spectral/spectrum-summary.ts';
-import type { SpectrumCheck } from '../utils/check-spectrum.ts';
-import { formatCount, formatFigure, formatLength, formatPercent, prettyUnit, wm2ToMwCm2 } from '../utils/format-figures.ts';
+import type { SpectrumFileCheck } from '#shared/measurement/check/check-spectrum-file.ts';
+import { formatCount, formatFigure, formatLength, formatPercent, prettyUnit, wm2ToMwCm2 } from '#src/lib/format.ts';
 import { Irradiance } from '#src/components/figures/irradiance.tsx';
 
 const BAND_LABELS: Record<string, string> = { red: 'Red', nir: 'Near-infrared' };
 
-const ENCODING_LABELS: Record<SpectrumCheck['encoding'], string> = {
+const ENCODING_LABELS: Record<NonNullable<SpectrumFileCheck['encoding']>, string> = {
   'utf-8': 'UTF-8',
   'utf-16le': 'UTF-16 (little-endian)',
   'utf-16be': 'UTF-16 (big-endian)',
@@ -36,14 +36,14 @@ function partialNote(band: BandIrradiance, [lo, hi]: [number, number]): string {
   );
 }
 
-export function UnitLine({ check }: { check: SpectrumCheck }) {
-  const unit = check.result.unit;
+export function UnitLine({ check }: { check: SpectrumFileCheck }) {
+  const unit = check.result?.unit;
   if (!unit) return <span className="font-semibold text-danger">not found</span>;
   return (
     <>
       <span className="font-semibold">{prettyUnit(unit)}</span>{' '}
       <span className="font-sans text-xs text-ink-muted">
-        {check.unitSource === 'chosen' ? '(chosen on this page: the file names no unit)' : '(as the file states)'}
+        {check.result?.unitSource === 'caller' ? '(chosen on this page: the file names no unit)' : '(as the file states)'}
       </span>
     </>
   );
@@ -56,7 +56,7 @@ export function SpectrumFigures({
   captionId,
   fileName,
 }: {
-  check: SpectrumCheck;
+  check: SpectrumFileCheck;
   summary: SpectrumSummary;
   captionId: string;
   fileName: string;
@@ -71,7 +71,7 @@ export function SpectrumFigures({
         <Row label="Unit in the file">
           <UnitLine check={check} />
         </Row>
-        <Row label="Text encoding">{ENCODING_LABELS[check.encoding]}</Row>
+        <Row label="Text encoding">{check.encoding ? ENCODING_LABELS[check.encoding] : '—'}</Row>
         <Row label="Samples">{formatCount(summary.samples)}</Row>
         <Row label="Wavelength range">{range}</Row>
         {Object.entries(summary.bands).map(([name, band]) => (

@@ -1,7 +1,7 @@
 import { lazy, Suspense, useId } from 'react';
 import { Card } from '#src/components/card.tsx';
-import type { SpectrumFileCheck } from '../hooks/use-spectrum-checks.ts';
-import { formatBytes } from '../utils/format-figures.ts';
+import type { SpectrumFileItem } from '../hooks/use-spectrum-checks.ts';
+import { formatBytes } from '#src/lib/format.ts';
 import { CheckStatus, ReadingNote } from './check-status.tsx';
 import { IssueList } from './issue-list.tsx';
 import { EmissionPeaksTable, SpectrumFigures, UnitLine } from './spectrum-figures.tsx';
@@ -20,11 +20,11 @@ function Title({ name, sizeBytes, ok }: { name: string; sizeBytes: number; ok: b
 }
 
 /** One spectrum file: readable or not, its figures, its chart and the importer's findings. */
-export function SpectrumResultCard({ item }: { item: SpectrumFileCheck }) {
+export function SpectrumResultCard({ item }: { item: SpectrumFileItem }) {
   const { file, check } = item;
   const issuesId = useId();
   const figuresId = useId();
-  const ok = check ? check.result.ok : file.state === 'failed' ? false : null;
+  const ok = check ? check.ok : file.state === 'failed' ? false : null;
   const errors = check?.issues.filter((i) => i.severity === 'error').length ?? 0;
 
   return (
@@ -33,7 +33,7 @@ export function SpectrumResultCard({ item }: { item: SpectrumFileCheck }) {
       {file.state === 'failed' ? <p className="font-sans text-sm font-semibold text-danger">{file.failure}</p> : null}
       {check ? (
         <div className="space-y-6">
-          {check.result.ok && check.result.spectrum && check.summary ? (
+          {check.ok && check.result?.spectrum && check.summary ? (
             <>
               <SpectrumFigures check={check} summary={check.summary} captionId={figuresId} fileName={file.name} />
               <section>
@@ -57,8 +57,7 @@ export function SpectrumResultCard({ item }: { item: SpectrumFileCheck }) {
           )}
           {check.issues.some((i) => i.code === 'no_unit') ? (
             <p className="font-sans text-sm text-ink">
-              Here, pick the unit under <span className="font-semibold">Unit if the file does not say</span> above (the
-              message's <code className="font-mono">--unit</code> is the bench command line's way).
+              Here, pick the unit under <span className="font-semibold">Unit if the file does not say</span> above.
             </p>
           ) : null}
           <section>

@@ -1,24 +1,19 @@
 import { useCallback, useRef, useState } from 'react';
-import type { DecodedText } from '#shared/measurement/import/decode-text.ts';
-import { decodeFileBytes } from '../utils/check-spectrum.ts';
-import { formatBytes } from '../utils/format-figures.ts';
-
-/** Instrument exports are kilobytes; anything this large is not one, and would stall the tab. */
-export const MAX_FILE_BYTES = 25 * 1024 * 1024;
+import { sizeIssue } from '#shared/measurement/check/limits.ts';
 
 export interface ReadFile {
   key: string;
   name: string;
   sizeBytes: number;
   state: 'reading' | 'read' | 'failed';
-  decoded: DecodedText | null;
+  bytes: Uint8Array | null;
   /** Why the bytes could not be read (the importer's own problems come later, as issues). */
   failure: string | null;
 }
 
 /**
- * Files picked or dropped, read as bytes in the browser and decoded to text. Nothing leaves the
- * page. `single` keeps only the latest file (the meter-readings input).
+ * Files picked or dropped, read as bytes in the browser. Nothing leaves the page. A file over
+ * the instrument-file limit is not read at all. `single` keeps only the latest file.
  */
 export function useReadFiles({ single = false }: { single?: boolean } = {}) {
   const [files, setFiles] = useState<ReadFile[]>([]);
@@ -40,25 +35,21 @@ export function useReadFiles({ single = false }: { single?: boolean } = {}) {
           name: file.name,
           sizeBytes: file.size,
           state: 'reading',
-          decoded: null,
+          bytes: null,
           failure: null,
         } satisfies ReadFile,
       }));
       setFiles((current) => [...(single ? [] : current), ...entries.map((e) => e.entry)]);
       for (const { file, entry } of entries) {
-        if (file.size > MAX_FILE_BYTES) {
-          update(entry.key, {
-            state: 'failed',
-            failure: `The file is ${formatBytes(file.size)}; instrument exports are far smaller, so it was not read.`,
-          });
+        const tooLarge = sizeIssue(file.size);
+        if (tooLarge) {
+          update(entry.key, { state: 'failed', failure: tooLarge.message });
           continue;
         }
         file
           .arrayBuffer()
-          .then((buffer) => update(entry.key, { state: 'read', decoded: decodeFileBytes(new Uint8Array(buffer)) }))
-          .catch(() =>
-            update(entry.key, { state: 'failed', failure: 'The browser could not read this file. Pick it again.' }),
-          );
+          .then((buffer) => update(entry.key, { state: 'read', bytes: new Uint8Array(buffer) }))
+          .catch(() => update(entry.key, { state: 'failed', failure: 'The browser could not read this file. Pick it again.' }));
       }
     },
     [single, update],

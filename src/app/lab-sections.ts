@@ -1,0 +1,36 @@
+import type { Capability, Role } from '#shared/auth/capabilities.ts';
+import { can } from '#shared/auth/capabilities.ts';
+
+/**
+ * The staff area's sections: one list feeds the router (routes and their guards) and the lab
+ * navigation. The server enforces each capability; the client only hides and explains.
+ */
+export interface LabSection {
+  /** Path under /lab ('' for the overview). */
+  path: string;
+  label: string;
+  capability: Capability;
+  /** Completes "Your role (Tester) cannot …" on the refusal page. */
+  action: string;
+  load: () => Promise<unknown>;
+  /** Listed in the lab navigation (sub-pages such as a run's page are not). */
+  inNav: boolean;
+}
+
+export const LAB_SECTIONS: readonly LabSection[] = [
+  { path: '', label: 'Overview', capability: 'lab.enter', action: 'use the staff area', inNav: true, load: () => import('./routes/lab/overview.tsx') },
+  { path: 'runs', label: 'Runs', capability: 'runs.create', action: 'create runs', inNav: true, load: () => import('./routes/lab/runs.tsx') },
+  { path: 'check', label: 'File check', capability: 'runs.upload', action: 'check instrument files', inNav: true, load: () => import('./routes/lab/file-check.tsx') },
+  { path: 'catalog', label: 'Catalog', capability: 'catalog.manage', action: 'manage the catalog', inNav: true, load: () => import('./routes/lab/catalog.tsx') },
+  { path: 'review', label: 'Review', capability: 'runs.review', action: 'review runs', inNav: true, load: () => import('./routes/lab/review.tsx') },
+  { path: 'admin/users', label: 'Users', capability: 'users.manage', action: 'manage users', inNav: true, load: () => import('./routes/lab/users.tsx') },
+];
+
+/** The sections a role sees in the lab navigation, with their full paths. */
+export function labNavFor(role: Role): { to: string; label: string; end: boolean }[] {
+  return LAB_SECTIONS.filter((s) => s.inNav && can(role, s.capability)).map((s) => ({
+    to: s.path ? `/lab/${s.path}` : '/lab',
+    label: s.label,
+    end: s.path === '',
+  }));
+}
