@@ -6,7 +6,7 @@ import { connect } from '#server/connect.ts';
 import { seedDemo } from '#seeds/demo-seed.ts';
 
 async function main(): Promise<void> {
-  const app = connect();
+  const app = await connect();
   try {
     await seedDemo(app.services);
     console.log('Demo data seeded.');

@@ -34,7 +34,7 @@ async function main(): Promise<number> {
     return 2;
   }
   const body = parsed.data;
-  const app = connect();
+  const app = await connect();
   try {
     // The same service the admin page uses, so the audit row is the same whoever creates a user.
     const user = await app.services.users.create(systemCaller('cli'), body);

@@ -7,6 +7,8 @@ import type { Logger } from 'pino';
 import type { Config } from './config.ts';
 import type { DbHandles } from './db/knex.ts';
 import type { Mailer } from './mail/mailer.ts';
+import type { JobQueue } from './queue/job-queue.ts';
+import { createPgFileStorage, type FileStorage } from './storage/file-storage.ts';
 import type { Clock, ServiceDeps } from './core/context.ts';
 import { createSessionAuth, type SessionAuth } from './auth/session-auth.ts';
 import { createSignInLimiter, type SignInLimiter } from './auth/sign-in-limiter.ts';
@@ -19,6 +21,8 @@ import { securityHeaders } from './http/security-headers.ts';
 import { healthRoutes } from './routes/health-routes.ts';
 import { authRoutes } from './routes/auth-routes.ts';
 import { usersRoutes } from './routes/users-routes.ts';
+import { catalogRoutes } from './routes/catalog-routes.ts';
+import { runsRoutes } from './routes/runs-routes.ts';
 
 export interface AppDeps {
   config: Config;
@@ -26,6 +30,10 @@ export interface AppDeps {
   mailer: Mailer;
   clock: Clock;
   logger: Logger;
+  /** The job queue (started by the caller): uploads queue their analysis here. */
+  queue: JobQueue;
+  /** Raw-file storage; PostgreSQL (stored_files) when absent. */
+  storage?: FileStorage;
   /** Overridable for tests; built from db.pool when absent. */
   sessions?: SessionAuth;
   signInLimiter?: SignInLimiter;
@@ -44,7 +52,16 @@ export function createApp(deps: AppDeps): Express {
       perIp: config.SIGN_IN_MAX_FAILURES_PER_IP,
       windowMinutes: config.SIGN_IN_WINDOW_MINUTES,
     });
-  const serviceDeps: ServiceDeps = { db: db.knex, clock: deps.clock, sessions, signInLimiter, mailer: deps.mailer, logger };
+  const serviceDeps: ServiceDeps = {
+    db: db.knex,
+    clock: deps.clock,
+    sessions,
+    signInLimiter,
+    mailer: deps.mailer,
+    logger,
+    queue: deps.queue,
+    storage: deps.storage ?? createPgFileStorage(db.knex),
+  };
   const services = createServices(serviceDeps);
 
   const app = express();
@@ -70,6 +87,8 @@ export function createApp(deps: AppDeps): Express {
   api.use(healthRoutes(() => pingDatabase(db.knex)));
   api.use(authRoutes(services.auth));
   api.use(usersRoutes(services.users));
+  api.use(catalogRoutes(services));
+  api.use(runsRoutes(services));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -11,9 +11,12 @@ import { createSignInLimiter } from './auth/sign-in-limiter.ts';
 import { createMailer, type Mailer } from './mail/mailer.ts';
 import { systemClock, type Clock, type ServiceDeps } from './core/context.ts';
 import { createServices, type Services } from './services/index.ts';
+import { startJobQueue, type JobQueue } from './queue/job-queue.ts';
+import { createPgFileStorage } from './storage/file-storage.ts';
 
 export interface Connection {
   db: DbHandles;
+  queue: JobQueue;
   deps: ServiceDeps;
   services: Services;
   close(): Promise<void>;
@@ -25,11 +28,15 @@ export interface ConnectOptions {
   mailer?: Mailer;
   clock?: Clock;
   signInLimits?: { perAccount: number; perIp: number; windowMinutes: number };
+  /** The worker supervises the job queue (expires lost jobs); other processes only queue. */
+  superviseQueue?: boolean;
 }
 
-export function connect(options: ConnectOptions = {}): Connection {
+export async function connect(options: ConnectOptions = {}): Promise<Connection> {
   const logger = options.logger ?? pino({ level: 'warn' });
-  const db = createDb(options.databaseUrl ?? resolveDatabaseUrl(), (err) => logger.warn({ err: err.message }, 'database connection error'));
+  const databaseUrl = options.databaseUrl ?? resolveDatabaseUrl();
+  const db = createDb(databaseUrl, (err) => logger.warn({ err: err.message }, 'database connection error'));
+  const queue = await startJobQueue({ databaseUrl, logger, supervise: options.superviseQueue ?? false });
   const deps: ServiceDeps = {
     db: db.knex,
     clock: options.clock ?? systemClock,
@@ -37,6 +44,12 @@ export function connect(options: ConnectOptions = {}): Connection {
     signInLimiter: createSignInLimiter(db.pool, options.signInLimits ?? { perAccount: 10, perIp: 50, windowMinutes: 15 }),
     mailer: options.mailer ?? createMailer({ from: 'Benchlight <no-reply@benchlight.invalid>', logger }),
     logger,
+    queue,
+    storage: createPgFileStorage(db.knex),
   };
-  return { db, deps, services: createServices(deps), close: () => closeDb(db) };
+  const close = async () => {
+    await queue.stop();
+    await closeDb(db);
+  };
+  return { db, queue, deps, services: createServices(deps), close };
 }

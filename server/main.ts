@@ -8,12 +8,16 @@ import { resolveDatabaseUrl } from './db/database-url.ts';
 import { createLogger } from './logger.ts';
 import { createMailer } from './mail/mailer.ts';
 import { createApp } from './app.ts';
+import { startJobQueue } from './queue/job-queue.ts';
 
 const config = loadConfig();
 const logger = createLogger(config.LOG_LEVEL);
-const db = createDb(resolveDatabaseUrl({ DATABASE_URL: config.DATABASE_URL }), (err) => logger.warn({ err: err.message }, 'database connection error'));
+const databaseUrl = resolveDatabaseUrl({ DATABASE_URL: config.DATABASE_URL });
+const db = createDb(databaseUrl, (err) => logger.warn({ err: err.message }, 'database connection error'));
 const mailer = createMailer({ smtpUrl: config.SMTP_URL, from: config.MAIL_FROM, logger });
-const app = createApp({ config, db, mailer, clock: { now: () => new Date() }, logger });
+// The web process only queues jobs; the worker (npm run worker) runs them.
+const queue = await startJobQueue({ databaseUrl, logger, supervise: false });
+const app = createApp({ config, db, mailer, clock: { now: () => new Date() }, logger, queue });
 
 const server = app.listen(config.PORT, config.HOST, () => {
   const address = server.address();
@@ -29,13 +33,13 @@ server.on('error', (err: NodeJS.ErrnoException) => {
   } else {
     console.error(`The web server could not start: ${err.message}`);
   }
-  void closeDb(db).then(() => process.exit(1));
+  void queue.stop().then(() => closeDb(db)).then(() => process.exit(1));
 });
 
 function shutdown(signal: string) {
   logger.info({ signal }, 'shutting down');
   server.close(() => {
-    void closeDb(db).then(() => process.exit(0));
+    void queue.stop().then(() => closeDb(db)).then(() => process.exit(0));
   });
   setTimeout(() => process.exit(0), 5000).unref();
 }

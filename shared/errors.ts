@@ -14,6 +14,7 @@ export const ERROR_STATUS = {
   not_found: 404,
   conflict: 409,
   email_taken: 409,
+  payload_too_large: 413,
   rate_limited: 429,
   database_unavailable: 503,
   internal: 500,

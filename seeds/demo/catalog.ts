@@ -143,10 +143,3 @@ export const DEMO_RUN_INSTRUMENT: Readonly<Record<string, string>> = {
 };
 
 export const DEMO_METER_ID = 'tallis-stonechat';
-
-/** The measuring grid shared by every demo run. */
-export const DEMO_GRID = {
-  distancesCm: [15, 30, 60],
-  xCm: [-40, -30, -20, -10, 0, 10, 20, 30, 40],
-  yCm: [-20, -10, 0, 10, 20],
-} as const;

@@ -4,6 +4,8 @@
  * every file draws its noise from its own seed, so order does not matter.
  */
 import type { ReceiverPoint } from '#shared/measurement/geometry/led-array.ts';
+import { gridPresets } from '#shared/lab/grid-presets.ts';
+import type { RunGrid } from '#shared/lab/grid-point.ts';
 import {
   FORMAT_EXTENSION,
   FORMAT_UNIT,
@@ -22,7 +24,6 @@ import {
 } from './spectrum.ts';
 import { unitIrradiance } from './device-irradiance.ts';
 import {
-  DEMO_GRID,
   DEMO_INSTRUMENTS,
   DEMO_METER_ID,
   DEMO_RUN_INSTRUMENT,
@@ -107,10 +108,14 @@ function clock(startSeconds: number): string {
   return [h, m, s].map((v) => String(v).padStart(2, '0')).join(':');
 }
 
-function gridPoints(): ReceiverPoint[] {
+/** The lab's standard grid template for a unit's emitting area (what a tester picks for it). */
+export function demoGrid(unit: DemoUnit): RunGrid {
+  return gridPresets({ widthCm: unit.widthCm, heightCm: unit.heightCm }).find((p) => p.id === 'standard')!.grid;
+}
+
+function gridPoints(grid: RunGrid): ReceiverPoint[] {
   const points: ReceiverPoint[] = [];
-  for (const distanceCm of DEMO_GRID.distancesCm)
-    for (const yCm of DEMO_GRID.yCm) for (const xCm of DEMO_GRID.xCm) points.push({ xCm, yCm, distanceCm });
+  for (const distanceCm of grid.distancesCm) for (const yCm of grid.yCm) for (const xCm of grid.xCm) points.push({ xCm, yCm, distanceCm });
   return points;
 }
 
@@ -124,9 +129,10 @@ export function buildDemoScenario(seed: number = DEMO_SEED): { manifest: DemoMan
   const files: DemoFile[] = [];
   const units: ManifestUnit[] = [];
   const runs: ManifestRun[] = [];
-  const points = gridPoints();
 
   DEMO_UNITS.forEach((unit, unitIndex) => {
+    const grid = demoGrid(unit);
+    const points = gridPoints(grid);
     const instrument = instrumentById(DEMO_RUN_INSTRUMENT[unit.id]);
     const format = instrument.format as ExportFormat;
     const wavelengths = wavelengthsFor(instrument);
@@ -202,7 +208,7 @@ export function buildDemoScenario(seed: number = DEMO_SEED): { manifest: DemoMan
       measuredOn,
       format,
       irradianceUnit: FORMAT_UNIT[format],
-      grid: { distancesCm: [...DEMO_GRID.distancesCm], xCm: [...DEMO_GRID.xCm], yCm: [...DEMO_GRID.yCm] },
+      grid: { distancesCm: [...grid.distancesCm], xCm: [...grid.xCm], yCm: [...grid.yCm] },
       files: spectrumFiles,
       meterReadings: { path: meterPath, instrumentId: DEMO_METER_ID, format: 'meter-readings' },
     });

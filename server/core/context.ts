@@ -3,6 +3,8 @@ import type { Db } from '../db/knex.ts';
 import type { SessionAuth } from '../auth/session-auth.ts';
 import type { SignInLimiter } from '../auth/sign-in-limiter.ts';
 import type { Mailer } from '../mail/mailer.ts';
+import type { JobQueue } from '../queue/job-queue.ts';
+import type { FileStorage } from '../storage/file-storage.ts';
 
 export interface Clock {
   now(): Date;
@@ -21,4 +23,6 @@ export interface ServiceDeps {
   signInLimiter: SignInLimiter;
   mailer: Mailer;
   logger: Logger;
+  queue: JobQueue;
+  storage: FileStorage;
 }

@@ -5,6 +5,8 @@ import pg from 'pg';
 // Counts and ids stay far below 2^53.
 pg.types.setTypeParser(pg.types.builtins.INT8, (v) => Number(v));
 pg.types.setTypeParser(pg.types.builtins.NUMERIC, (v) => Number(v));
+// A DATE is a calendar day, not an instant: keep it as YYYY-MM-DD rather than a local midnight.
+pg.types.setTypeParser(pg.types.builtins.DATE, (v) => v);
 
 /** The query builder handle services pass around; only server/db knows it is Knex. */
 export type Db = Knex;

@@ -1,12 +1,28 @@
 import type { ServiceDeps } from '../core/context.ts';
 import { createAuthService } from './auth-service.ts';
 import { createUsersService } from './users-service.ts';
+import { createMakersService } from './makers-service.ts';
+import { createModelsService } from './models-service.ts';
+import { createDeviceUnitsService } from './device-units-service.ts';
+import { createInstrumentsService } from './instruments-service.ts';
+import { createRunsService } from './runs-service.ts';
+import { createReadingsService } from './readings-service.ts';
+import { createRunUploadsService } from './run-uploads-service.ts';
+import { createRunProcessingService } from './run-processing-service.ts';
 
 /** Every service, built once from the same collaborators (the web app, scripts and tests share this). */
 export function createServices(deps: ServiceDeps) {
   return {
     auth: createAuthService(deps),
     users: createUsersService(deps),
+    makers: createMakersService(deps),
+    models: createModelsService(deps),
+    deviceUnits: createDeviceUnitsService(deps),
+    instruments: createInstrumentsService(deps),
+    runs: createRunsService(deps),
+    readings: createReadingsService(deps),
+    runUploads: createRunUploadsService(deps),
+    runProcessing: createRunProcessingService(deps),
   };
 }
 export type Services = ReturnType<typeof createServices>;

@@ -6,6 +6,7 @@ import { createApp } from '#server/app.ts';
 import { loadConfig } from '#server/config.ts';
 import { createDb, closeDb } from '#server/db/knex.ts';
 import { makeTestApp } from './helpers/test-app.ts';
+import { unusedQueue } from './helpers/unused-queue.ts';
 
 describe('error answers', () => {
   let t: Awaited<ReturnType<typeof makeTestApp>>;
@@ -56,6 +57,7 @@ describe('unknown errors', () => {
       db,
       mailer: { send: async () => {} },
       clock: { now: () => new Date() },
+      queue: unusedQueue,
       logger: pino({ level: 'error' }, sink),
       sessions: broken,
     });

@@ -5,6 +5,7 @@ import { createApp } from '#server/app.ts';
 import { loadConfig } from '#server/config.ts';
 import { createDb, closeDb } from '#server/db/knex.ts';
 import { makeTestApp } from './helpers/test-app.ts';
+import { unusedQueue } from './helpers/unused-queue.ts';
 
 describe('GET /api/health', () => {
   let t: Awaited<ReturnType<typeof makeTestApp>>;
@@ -28,6 +29,7 @@ describe('GET /api/health', () => {
       db,
       mailer: { send: async () => {} },
       clock: { now: () => new Date() },
+      queue: unusedQueue,
       logger: pino({ level: 'silent' }),
     });
     try {

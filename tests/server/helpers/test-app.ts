@@ -12,26 +12,53 @@ import { systemCaller } from '#server/core/caller.ts';
 import { createUsersService } from '#server/services/users-service.ts';
 import type { Mailer, MailMessage } from '#server/mail/mailer.ts';
 import type { Role } from '#shared/auth/capabilities.ts';
+import { startJobQueue } from '#server/queue/job-queue.ts';
+import { createSignInLimiter } from '#server/auth/sign-in-limiter.ts';
+import { createServices } from '#server/services/index.ts';
+import { createPgFileStorage } from '#server/storage/file-storage.ts';
+import { registerJobHandlers } from '#server/job-handlers.ts';
 
 /**
  * The real app on the real test database, listening on an ephemeral 127.0.0.1 port so the
  * Origin check sees a real host; mail is collected in memory. `origin` is the app's own origin.
  */
-export async function makeTestApp(overrides: Partial<Record<string, string>> = {}, databaseUrl: string = inject('databaseUrl')) {
+export async function makeTestApp(
+  overrides: Partial<Record<string, string>> = {},
+  databaseUrl: string = inject('databaseUrl'),
+  options: { worker?: boolean } = {},
+) {
   const config: Config = loadConfig({ NODE_ENV: 'test', LOG_LEVEL: 'silent', ...overrides });
   const db: DbHandles = createDb(databaseUrl, () => {});
   const sent: MailMessage[] = [];
   const mailer: Mailer = { send: async (m) => void sent.push(m) };
-  const app = createApp({ config, db, mailer, clock: { now: () => new Date() }, logger: pino({ level: 'silent' }) });
+  const logger = pino({ level: 'silent' });
+  // The real queue in the test database: uploads queue their jobs; tests run them with runJobs().
+  const queue = await startJobQueue({ databaseUrl, logger, supervise: false });
+  const clock = { now: () => new Date() };
+  const app = createApp({ config, db, mailer, clock, logger, queue });
+  const sessions = createSessionAuth(db.pool);
+  const services = createServices({
+    db: db.knex,
+    clock,
+    sessions,
+    signInLimiter: createSignInLimiter(db.pool, { perAccount: 10, perIp: 50, windowMinutes: 15 }),
+    mailer,
+    logger,
+    queue,
+    storage: createPgFileStorage(db.knex),
+  });
+  // The worker's handlers in this process, on the same queue, for tests that need files analysed.
+  if (options.worker) await registerJobHandlers(queue, services, logger);
   const server = await new Promise<Server>((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
   const origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   const close = async () => {
     await new Promise<void>((resolve) => server.close(() => resolve()));
+    await queue.stop();
     await closeDb(db);
   };
-  return { app, db, sent, origin, api: () => request(origin), agent: () => request.agent(origin), close };
+  return { app, db, queue, services, sent, origin, api: () => request(origin), agent: () => request.agent(origin), close };
 }
 
 /**
