@@ -40,6 +40,10 @@ export function uploadFiles(): RequestHandler {
           case 'LIMIT_PART_COUNT':
             return next(new AppError('payload_too_large', `A batch may hold at most ${UPLOAD_LIMITS.files} files. Upload it in parts.`, { limit: 'files', max: UPLOAD_LIMITS.files }));
           case 'LIMIT_UNEXPECTED_FILE':
+            // multer reports a field over its maxCount with this code too.
+            if (err.field === 'files' || err.field === 'manifest') {
+              return next(new AppError('payload_too_large', err.field === 'files' ? `A batch may hold at most ${UPLOAD_LIMITS.files} files. Upload it in parts.` : 'Send one manifest at most.', { limit: err.field === 'files' ? 'files' : 'manifest', max: err.field === 'files' ? UPLOAD_LIMITS.files : 1 }));
+            }
             return next(new AppError('validation_failed', `Files go in the field "files" (and a manifest in "manifest"), not "${err.field}".`, [{ path: `body.${err.field}`, message: 'Unexpected file field.' }]));
           default:
             return next(new AppError('validation_failed', `The upload could not be read: ${err.message}.`, [{ path: 'body', message: err.message }]));
