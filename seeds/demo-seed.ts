@@ -6,6 +6,7 @@
 import { systemCaller } from '#server/core/caller.ts';
 import type { Services } from '#server/services/index.ts';
 import { DEMO_USERS } from './data/demo-users.ts';
+import { seedDemoLab } from './demo-lab.ts';
 
 export async function seedDemo(services: Services, env: Record<string, string | undefined> = process.env): Promise<void> {
   if (env.NODE_ENV === 'production') {
@@ -21,4 +22,10 @@ export async function seedDemo(services: Services, env: Record<string, string | 
       await services.users.setPassword(seed, id, u.password);
     }
   }
+  const person = async (role: 'tester' | 'editor') => {
+    const u = DEMO_USERS.find((x) => x.role === role)!;
+    const id = (await services.users.findIdByEmail(seed, u.email))!;
+    return { id, email: u.email, displayName: u.displayName, role };
+  };
+  await seedDemoLab(services, { tester: await person('tester'), editor: await person('editor') });
 }

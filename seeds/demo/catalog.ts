@@ -49,11 +49,11 @@ export interface DemoInstrument {
 }
 
 export const DEMO_INSTRUMENTS: readonly DemoInstrument[] = [
-  { id: 'tallis-wren', kind: 'spectroradiometer', maker: 'Tallis Instruments', model: 'Wren bench spectroradiometer', serial: 'TI-23-0031', calibrationDate: '2025-02-11', rangeNm: { from: 350, to: 1050 }, format: 'comma-preamble' },
-  { id: 'hexmoor-fieldfare', kind: 'spectroradiometer', maker: 'Hexmoor Metrology', model: 'Fieldfare array spectroradiometer', serial: 'HM-22-0207', calibrationDate: '2024-11-28', rangeNm: { from: 350, to: 1050 }, format: 'semicolon-decimal-comma' },
-  { id: 'pellow-linnet', kind: 'spectroradiometer', maker: 'Pellow Scientific', model: 'Linnet compact spectrometer', serial: 'PS-24-1180', calibrationDate: '2025-01-20', rangeNm: { from: 345, to: 1041 }, format: 'tab-counts-descending' },
-  { id: 'orrin-siskin', kind: 'spectroradiometer', maker: 'Orrin Labs', model: 'Siskin benchtop spectroradiometer', serial: 'OL-23-0456', calibrationDate: '2024-12-03', rangeNm: { from: 350, to: 1050 }, format: 'comma-bom' },
-  { id: 'tallis-stonechat', kind: 'irradiance meter', maker: 'Tallis Instruments', model: 'Stonechat thermopile meter', serial: 'TI-24-0112', calibrationDate: '2025-02-11', rangeNm: null, format: 'meter-readings' },
+  { id: 'tallis-wren', kind: 'spectroradiometer', maker: 'Tallis Instruments', model: 'Wren bench spectroradiometer', serial: 'TI-23-0031', calibrationDate: '2026-02-11', rangeNm: { from: 350, to: 1050 }, format: 'comma-preamble' },
+  { id: 'hexmoor-fieldfare', kind: 'spectroradiometer', maker: 'Hexmoor Metrology', model: 'Fieldfare array spectroradiometer', serial: 'HM-22-0207', calibrationDate: '2025-09-28', rangeNm: { from: 350, to: 1050 }, format: 'semicolon-decimal-comma' },
+  { id: 'pellow-linnet', kind: 'spectroradiometer', maker: 'Pellow Scientific', model: 'Linnet compact spectrometer', serial: 'PS-24-1180', calibrationDate: '2026-01-20', rangeNm: { from: 345, to: 1041 }, format: 'tab-counts-descending' },
+  { id: 'orrin-siskin', kind: 'spectroradiometer', maker: 'Orrin Labs', model: 'Siskin benchtop spectroradiometer', serial: 'OL-23-0456', calibrationDate: '2025-12-03', rangeNm: { from: 350, to: 1050 }, format: 'comma-bom' },
+  { id: 'tallis-stonechat', kind: 'irradiance meter', maker: 'Tallis Instruments', model: 'Stonechat thermopile meter', serial: 'TI-24-0112', calibrationDate: '2026-02-11', rangeNm: null, format: 'meter-readings' },
 ];
 
 const red = (peakNm: number, fwhmNm: number, powerFraction: number): DemoEmitter => ({

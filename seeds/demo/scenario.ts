@@ -140,7 +140,7 @@ export function buildDemoScenario(seed: number = DEMO_SEED): { manifest: DemoMan
     const shapes = sampledLineShapes(unit.emitters, wavelengths);
     const model = unitIrradiance(unit, points, seed);
     const runId = `${unit.id}-run1`;
-    const measuredOn = `2025-03-${String(4 + unitIndex).padStart(2, '0')}`;
+    const measuredOn = `2026-10-${String(5 + unitIndex).padStart(2, '0')}`;
     const spectrumFiles: ManifestSpectrumFile[] = [];
     const center: Record<string, number> = {};
 

@@ -120,6 +120,12 @@ export function createReadingsService(deps: Pick<ServiceDeps, 'db' | 'clock' | '
       };
     },
 
+    /** Ids of every file uploaded to a run (the seed and tools that process without a worker). */
+    async fileIds(caller: Caller, runId: string): Promise<string[]> {
+      assertCan(caller, 'lab.enter');
+      return (await readingsRepo.filesForRun(deps.db, runId)).map((f) => f.id);
+    },
+
     /** The raw bytes of an uploaded file, as uploaded (provenance). */
     async rawFile(caller: Caller, runId: string, fileId: string) {
       assertCan(caller, 'lab.enter');

@@ -7,6 +7,8 @@ import { bandValues, COMBINED_BAND } from '#shared/lab/band-values.ts';
 import { gridContains, type GridPoint } from '#shared/lab/grid-point.ts';
 import { centerDrift, DRIFT_LIMIT, looksSaturated, outlierReadings, type Flag } from '#shared/lab/run-flags.ts';
 import { runFigures, type PointValues } from '#shared/lab/run-figures.ts';
+import { fitEffectiveBeamAngle } from '#shared/measurement/distance/beam-angle.ts';
+import { ledArrayIrradiance } from '#shared/measurement/geometry/led-array.ts';
 import { checkMeterReadingsFile } from '#shared/measurement/check/check-meter-readings-file.ts';
 import { checkSpectrumFile } from '#shared/measurement/check/check-spectrum-file.ts';
 import { issue } from '#shared/measurement/import/import-issue.ts';
@@ -142,7 +144,7 @@ export function createRunProcessingService(deps: Pick<ServiceDeps, 'db' | 'clock
         .map((r) => ({ ...pick(r), values: valueOf.get(r.id)!.values }));
       const figures = runFigures(gridValues, bandNames, { widthCm: run.emittingWidthCm, heightCm: run.emittingHeightCm });
 
-      flags.push(...outlierFlags(gridValues), ...driftFlags(run, readings, valueOf), ...runLevelFlags(run, readings));
+      flags.push(...outlierFlags(gridValues, expectedShape(run, gridValues)), ...driftFlags(run, readings, valueOf), ...runLevelFlags(run, readings));
       await runAnalysesRepo.upsert(deps.db, runId, { fingerprint, figures, flags, values }, deps.clock.now());
     },
 
@@ -172,14 +174,41 @@ export type RunProcessingService = ReturnType<typeof createRunProcessingService>
 
 const pick = (p: GridPoint): GridPoint => ({ distanceCm: p.distanceCm, xCm: p.xCm, yCm: p.yCm });
 
-function outlierFlags(points: readonly PointValues[]): Flag[] {
+/**
+ * The field the run's readings should follow, up to scale: identical cosⁿ LEDs filling the
+ * model's emitting area, at the beam angle that best fits the readings themselves (the effective
+ * beam angle of the measurement core). LED pitch from the model's LED count, else 2 cm.
+ */
+function expectedShape(run: RunRecord, points: readonly PointValues[]): (p: GridPoint) => number {
+  const area = run.emittingWidthCm * run.emittingHeightCm;
+  const pitchCm = run.ledCount && run.ledCount > 0 ? Math.sqrt(area / run.ledCount) : 2;
+  const emitter = { widthCm: run.emittingWidthCm, heightCm: run.emittingHeightCm, pitchCm };
+  const readings = points
+    .filter((p) => (p.values[COMBINED_BAND] ?? 0) > 0)
+    .map((p) => ({ distanceCm: p.distanceCm, xCm: p.xCm, yCm: p.yCm, irradiance: p.values[COMBINED_BAND] as number }));
+  const fit = fitEffectiveBeamAngle(emitter, readings);
+  const fullAngleDeg = fit?.fittedFullAngleDeg ?? 120;
+  const cache = new Map<string, number>();
+  return (p) => {
+    const key = `${p.distanceCm}|${p.xCm}|${p.yCm}`;
+    let v = cache.get(key);
+    if (v === undefined) {
+      v = ledArrayIrradiance({ ...emitter, fullAngleDeg }, p);
+      cache.set(key, v);
+    }
+    return v;
+  };
+}
+
+function outlierFlags(points: readonly PointValues[], expected: (p: GridPoint) => number): Flag[] {
   const flags: Flag[] = [];
   const distances = [...new Set(points.map((p) => p.distanceCm))];
   for (const d of distances) {
     const plane = points
       .filter((p) => p.distanceCm === d && p.values[COMBINED_BAND] !== null)
       .map((p) => ({ xCm: p.xCm, yCm: p.yCm, value: p.values[COMBINED_BAND] as number }));
-    for (const o of outlierReadings(plane)) {
+    const shape = (xCm: number, yCm: number) => expected({ distanceCm: d, xCm, yCm });
+    for (const o of outlierReadings(plane, { shape, maxSpanCm: 2 * d })) {
       const pct = Math.round((o.ratio - 1) * 100);
       flags.push({
         code: 'outlier',

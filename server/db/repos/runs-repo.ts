@@ -15,6 +15,7 @@ export interface RunRecord {
   category: string;
   emittingWidthCm: number;
   emittingHeightCm: number;
+  ledCount: number | null;
   instrumentId: string;
   instrumentName: string;
   instrumentKind: 'spectroradiometer' | 'irradiance_meter';
@@ -61,6 +62,7 @@ function base(db: Knex) {
       'md.category',
       'md.emitting_width_cm',
       'md.emitting_height_cm',
+      'md.led_count',
       'mk.name as maker_name',
       'i.name as instrument_name',
       'i.kind as instrument_kind',
@@ -86,6 +88,7 @@ function toRecord(r: any): RunRecord {
     category: r.category,
     emittingWidthCm: Number(r.emitting_width_cm),
     emittingHeightCm: Number(r.emitting_height_cm),
+    ledCount: r.led_count,
     instrumentId: r.instrument_id,
     instrumentName: r.instrument_name,
     instrumentKind: r.instrument_kind,

@@ -22,7 +22,7 @@ export function demoRunFiles(unitIndex = 0): { name: string; bytes: Buffer }[] {
 /** A maker, model, unit and spectroradiometer made through the API as a tester would. */
 export async function makeCatalog(agent: Agent, origin: string, unitIndex = 0, suffix = '') {
   const demo = DEMO_UNITS[unitIndex];
-  const post = async (path: string, body: unknown) => {
+  const post = async (path: string, body: object) => {
     const res = await agent.post(path).set('Origin', origin).send(body);
     if (res.status !== 201) throw new Error(`${path}: ${res.status} ${JSON.stringify(res.body)}`);
     return res.body;
