@@ -92,7 +92,7 @@ function ingest(files: Uint8Array[]): number {
     if (i % 25 === 0) sampleMemory();
     const check = checkSpectrumFile(bytes, { bands: DEFAULT_BANDS });
     if (!check.summary) throw new Error(`benchmark export rejected: ${JSON.stringify(check.issues[0])}`);
-    checksum += check.summary.bands.red.wm2;
+    checksum += check.summary.bands.red.wm2 ?? 0;
   }
   return checksum;
 }

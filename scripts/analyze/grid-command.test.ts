@@ -32,13 +32,17 @@ function fixtureRows(name: string): { d: number; x: number; y: number; e: number
     .map(([d, x, y, e]) => ({ d, x, y, e }));
 }
 
-const PLANE_KEYS = ['centerMwCm2', 'distanceCm', 'footprint', 'peakMwCm2', 'points', 'spreadWidthCm', 'widthAtEdge'];
+// Every key keeps its meaning across versions; new figures come as new keys. `footprintArea` (the
+// area-weighted uniformity from the interpolated map) was added beside `footprint` (readings only).
+const PLANE_KEYS = ['centerMwCm2', 'distanceCm', 'footprint', 'footprintArea', 'peakMwCm2', 'points', 'spreadWidthCm', 'widthAtEdge'];
+const AREA_KEYS = ['coveredShare', 'cv', 'edgesWithoutReading', 'issues', 'minOverMax', 'minOverMean', 'nonUniformityPct'];
 const timeout = 30_000;
 
 describe('grid CLI on model-generated fixtures', () => {
   it('34 × 80 cm panel at 15 cm: widths, centre and footprint uniformity', { timeout }, async () => {
-    const { code, stdout } = await grid('--footprint', '34x80', fixture('panel-34x80-15cm.csv'));
+    const { code, stdout, stderr } = await grid('--footprint', '34x80', fixture('panel-34x80-15cm.csv'));
     expect(code).toBe(0);
+    expect(stderr).toMatch(/\(plane at 15 cm\): warning footprint_edge_unmeasured/);
     const report = JSON.parse(stdout);
     expect(report.planes).toHaveLength(1);
     const [plane] = report.planes;
@@ -49,15 +53,17 @@ describe('grid CLI on model-generated fixtures', () => {
     expect(plane.points).toBe(41 * 11);
     expect(plane.peakMwCm2).toBe(60);
     expect(plane.centerMwCm2).toBe(60);
-    // Common practice, no source: a 34 × 80 cm Lambertian emitting area at 15 cm has 50 % and 25 %
-    // spread widths of about 39 and 54 cm (50 % near the emitters' edge, 25 % a few cm beyond).
+    // Results of the view-factor model (Howell B-3, computed): a 34 × 80 cm Lambertian emitting area
+    // at 15 cm has 50 % and 25 % spread widths of about 39 and 54 cm (50 % near the emitters' edge,
+    // 25 % a few cm beyond).
     expect(Math.abs(plane.spreadWidthCm['50'] - 39)).toBeLessThan(1);
     expect(Math.abs(plane.spreadWidthCm['25'] - 54)).toBeLessThan(1);
     expect(plane.widthAtEdge).toEqual([]);
     expect(report.falloffExponent).toBeNull();
 
-    // Footprint figures cross-checked with simple-statistics on the file's own readings
-    // (U₀ per EN 12464-1; population σ; NU per IEC 61836 3.4.54).
+    // Footprint figures keep their meaning, the readings inside the area: cross-checked with
+    // simple-statistics on the file's own readings (U₀ per EN 12464-1; population σ; non-uniformity
+    // as IEC 60904-9 defines it).
     const inside = fixtureRows('panel-34x80-15cm.csv')
       .filter((r) => Math.abs(r.x) <= 17 && Math.abs(r.y) <= 40)
       .map((r) => r.e);
@@ -65,6 +71,19 @@ describe('grid CLI on model-generated fixtures', () => {
     expect(plane.footprint.minOverMax).toBeCloseTo(min(inside) / max(inside), 8);
     expect(plane.footprint.cv).toBeCloseTo(standardDeviation(inside) / mean(inside), 8);
     expect(plane.footprint.nonUniformityPct).toBeCloseTo((100 * (max(inside) - min(inside))) / (max(inside) + min(inside)), 6);
+
+    // footprintArea: over the whole 34 × 80 cm area from the interpolated map, area-weighted. Dense
+    // reference (computed from Howell B-3, mean checked against the C-11 closed form in
+    // footprint-area.test.ts): U₀ = 0.4036, CV = 0.2051. The file's 2 × 10 cm grid gives 0.456 from
+    // its readings alone, the map 0.408.
+    expect(Object.keys(plane.footprintArea).sort()).toEqual(AREA_KEYS);
+    expect(Math.abs(plane.footprintArea.minOverMean - 0.4036)).toBeLessThan(0.005);
+    expect(Math.abs(plane.footprintArea.cv - 0.2051)).toBeLessThan(0.006);
+    expect(plane.footprint.minOverMean).toBeGreaterThan(0.45);
+    expect(plane.footprintArea.coveredShare).toBe(1);
+    // Its columns sit at x = ±16 and ±18: none on the edges x = ±17, so the CLI warns.
+    expect(plane.footprintArea.edgesWithoutReading).toEqual(['left', 'right']);
+    expect(plane.footprintArea.issues.map((i: { code: string }) => i.code)).toEqual(['footprint_edge_unmeasured']);
   });
 
   it('three distances: planes sorted, falloff exponent = least-squares slope of the model centres', { timeout }, async () => {
@@ -72,7 +91,10 @@ describe('grid CLI on model-generated fixtures', () => {
     expect(code).toBe(0);
     const report = JSON.parse(stdout);
     expect(report.planes.map((p: { distanceCm: number }) => p.distanceCm)).toEqual([15, 30, 60]);
-    for (const p of report.planes) expect(p.footprint).toBeNull();
+    for (const p of report.planes) {
+      expect(p.footprint).toBeNull();
+      expect(p.footprintArea).toBeNull();
+    }
     // Reference: centres from the B-3 configuration factor (Howell), regressed with simple-statistics.
     const panel = { widthCm: 34, heightCm: 80 };
     const pairs = [15, 30, 60].map((d) => [Math.log(d), Math.log(panelViewFactor(panel, { xCm: 0, yCm: 0, distanceCm: d }))]);

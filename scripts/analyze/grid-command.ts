@@ -2,8 +2,9 @@
  * `analyze.ts grid [--footprint WxH] FILE`
  * Checks a meter-readings file (distance_cm, x_cm, y_cm, irradiance_mw_cm2) through the shared
  * check pipeline and prints one JSON document: per plane (sorted by distance) the peak, centre,
- * spread widths at 80/50/25 % and, with --footprint, uniformity over the emitting area; plus the
- * falloff exponent of the centres.
+ * spread widths at 80/50/25 % and, with --footprint, uniformity over the emitting area (`footprint`:
+ * the readings inside it; `footprintArea`: the interpolated map, area-weighted, with its warnings);
+ * plus the falloff exponent of the centres.
  * Exit codes: 0 file usable (importer warnings go to stderr and into "issues"), 1 file not usable
  * (missing, unreadable, rejected by the importer, no readings), 2 bad command line.
  */
@@ -14,11 +15,13 @@ import type { GridAnalysis } from '#shared/measurement/check/analyze-grid.ts';
 import { parseFootprintCm } from '#shared/measurement/check/footprint-text.ts';
 import { STANDARD_LEVELS_PCT } from '#shared/measurement/plane/levels.ts';
 import type { FootprintCm } from '#shared/measurement/plane/uniformity.ts';
+import type { FootprintEdge } from '#shared/measurement/plane/footprint-area.ts';
 
 export const GRID_USAGE =
   'usage: analyze.ts grid [--footprint WxH] FILE\n' +
   '  FILE         meter readings with columns distance_cm, x_cm, y_cm, irradiance_mw_cm2\n' +
-  '  --footprint  emitting area W × H in cm (e.g. 34x80, 34X80 or 34×80) for uniformity figures\n' +
+  '  --footprint  emitting area W × H in cm (e.g. 34x80, 34X80 or 34×80) for uniformity figures:\n' +
+  '               "footprintArea" over the whole area (interpolated, area-weighted), "footprint" of the readings inside\n' +
   'Prints one JSON document. Exit 0: file usable; 1: file not usable; 2: bad command line.\n';
 
 export interface GridPlaneReport {
@@ -28,7 +31,26 @@ export interface GridPlaneReport {
   centerMwCm2: number | null;
   spreadWidthCm: Record<string, number>;
   widthAtEdge: number[];
-  footprint: { minOverMean: number | null; minOverMax: number | null; cv: number | null; nonUniformityPct: number | null } | null;
+  /** Uniformity of the readings inside the emitting area (each reading weighs the same). */
+  footprint: UniformityFigures | null;
+  /**
+   * Uniformity of the interpolated map over the emitting area, area-weighted: comparable across
+   * grids. Added beside `footprint`, whose meaning is unchanged.
+   */
+  footprintArea:
+    | (UniformityFigures & { coveredShare: number | null; edgesWithoutReading: FootprintEdge[]; issues: ImportIssue[] })
+    | null;
+}
+
+interface UniformityFigures {
+  minOverMean: number | null;
+  minOverMax: number | null;
+  cv: number | null;
+  nonUniformityPct: number | null;
+}
+
+function uniformityFigures(u: UniformityFigures): UniformityFigures {
+  return { minOverMean: tidy(u.minOverMean), minOverMax: tidy(u.minOverMax), cv: tidy(u.cv), nonUniformityPct: tidy(u.nonUniformityPct) };
 }
 
 export interface GridReport {
@@ -59,7 +81,7 @@ export function buildGridReport(file: string, grid: GridAnalysis, issues: Import
   const planes = grid.planes.map(({ distanceCm, analysis: a }): GridPlaneReport => {
     const spreadWidthCm: Record<string, number> = {};
     for (const w of a.spreadWidths) spreadWidthCm[String(w.pct)] = tidy(w.widthCm);
-    const fp = a.footprint;
+    const area = a.footprintArea;
     return {
       distanceCm: tidy(distanceCm),
       points: a.points,
@@ -67,12 +89,13 @@ export function buildGridReport(file: string, grid: GridAnalysis, issues: Import
       centerMwCm2: tidy(a.center),
       spreadWidthCm,
       widthAtEdge: a.widthAtEdge,
-      footprint: fp
+      footprint: a.footprint ? uniformityFigures(a.footprint) : null,
+      footprintArea: area
         ? {
-            minOverMean: tidy(fp.minOverMean),
-            minOverMax: tidy(fp.minOverMax),
-            cv: tidy(fp.cv),
-            nonUniformityPct: tidy(fp.nonUniformityPct),
+            ...uniformityFigures(area),
+            coveredShare: tidy(area.coveredShare),
+            edgesWithoutReading: area.edgesWithoutReading,
+            issues: area.issues.map(withCliHint),
           }
         : null,
     };
@@ -110,6 +133,11 @@ export async function runGridCommand(args: string[]): Promise<number> {
   if (check.result.readings.length === 0) {
     process.stderr.write(`analyze grid: ${file} has no readings.\n`);
     return 1;
+  }
+  for (const plane of check.planes) {
+    for (const i of plane.analysis.footprintArea?.issues ?? []) {
+      process.stderr.write(`${file} (plane at ${tidy(plane.distanceCm)} cm): ${i.severity} ${i.code}: ${i.message}\n`);
+    }
   }
   process.stdout.write(`${JSON.stringify(buildGridReport(file, check, issues), null, 2)}\n`);
   return 0;

@@ -65,6 +65,18 @@ describe('analyze.ts spectrum', { timeout: 30000 }, () => {
     expect(file.bands.edge).toMatchObject({ partial: true });
   });
 
+  it('prints wm2: null, not 0, for a band the file does not reach, with a band_not_measured issue', async () => {
+    // The fixture covers 590–810 nm: nothing of 300–400 nm was measured, which is unknown, not "no
+    // emission" (definition); 600–700 nm lies inside and keeps its hand-computed 1.5 W/m².
+    const run = await analyze('--bands', 'uv=300-400,red=600-700', fixture('utf8-bom-crlf.csv'));
+    expect(run.code).toBe(0);
+    const [file] = JSON.parse(run.stdout).files;
+    expect(file.bands.uv).toEqual({ loNm: 300, hiNm: 400, wm2: null, partial: true });
+    expect(file.bands.red.wm2).toBeCloseTo(1.5, 12);
+    expect(file.issues.map((i: { code: string; severity: string }) => [i.code, i.severity])).toEqual([['band_not_measured', 'warning']]);
+    expect(file.issues[0].message).toMatch(/"uv".*590–810 nm.*not measured/);
+  });
+
   it('decodes UTF-16 files from their bytes and reports located issues with lines', async () => {
     const run = await analyze(fixture('utf16le-bom.csv'), fixture('out-of-range-rows.csv'));
     expect(run.code).toBe(0);

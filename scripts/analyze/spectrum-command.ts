@@ -1,7 +1,8 @@
 /**
  * `analyze.ts spectrum [--bands NAME=LO-HI,...] [--unit UNIT] FILE...`
  * Imports each spectrum file and prints one JSON document with its band irradiances, total
- * irradiance, peak wavelength and photon flux (irradiance figures in W/m²).
+ * irradiance, peak wavelength and photon flux (irradiance figures in W/m²). A band the file does
+ * not reach at all has `wm2: null` (not measured, not zero) and a `band_not_measured` issue.
  * Exit codes: 0 every file usable, 1 any file not usable (still reported in the JSON),
  * 2 bad command line (unknown option or unit, malformed --bands, no file).
  */
@@ -26,7 +27,8 @@ interface FileReport {
   unit: string | null;
   samples: number;
   rangeNm: [number, number] | null;
-  bands: Record<string, { loNm: number; hiNm: number; wm2: number; partial: boolean }> | null;
+  /** wm2 null: the band lies wholly outside the file's range, not measured (not zero). */
+  bands: Record<string, { loNm: number; hiNm: number; wm2: number | null; partial: boolean }> | null;
   totalWm2: number | null;
   peakNm: number | null;
   photonFluxUmolM2S: number | null;

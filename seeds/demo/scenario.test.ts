@@ -125,8 +125,8 @@ describe('generated spectra through the importer and band integration', () => {
     manifest.runs.forEach((run, i) => {
       const unit = DEMO_UNITS.find((u) => u.id === run.unitId)!;
       const result = importSpectrum(byPath.get(centerFile(i, 30).path)!);
-      const red = bandIrradianceWm2(result.spectrum!, { loNm: 600, hiNm: 700 }).wm2;
-      const nir = bandIrradianceWm2(result.spectrum!, { loNm: 700, hiNm: 1100 }).wm2;
+      const red = bandIrradianceWm2(result.spectrum!, { loNm: 600, hiNm: 700 }).wm2!;
+      const nir = bandIrradianceWm2(result.spectrum!, { loNm: 700, hiNm: 1100 }).wm2!;
       const share = red / (red + nir);
       const nominalRed = unit.emitters.filter((e) => e.peakNm < 700).reduce((s, e) => s + e.powerFraction, 0);
       const expectedRed = unit.emitters.reduce((s, e) => s + e.powerFraction * lineFractionBetween(e, 600, 700), 0);

@@ -73,8 +73,8 @@ describe('File check in Chromium, with the demo exports', () => {
 
       // The page shows what the shared core computes from the same text…
       const summary = summarizeSpectrum(importSpectrum(s.text).spectrum!, DEFAULT_BANDS);
-      expect(await rowValue(card, 'Red (600–700 nm)')).toContain(`${formatFigure(summary.bands.red.wm2 / 10)} mW/cm²`);
-      expect(await rowValue(card, 'Near-infrared (700–1100 nm)')).toContain(`${formatFigure(summary.bands.nir.wm2 / 10)} mW/cm²`);
+      expect(await rowValue(card, 'Red (600–700 nm)')).toContain(`${formatFigure(summary.bands.red.wm2! / 10)} mW/cm²`);
+      expect(await rowValue(card, 'Near-infrared (700–1100 nm)')).toContain(`${formatFigure(summary.bands.nir.wm2! / 10)} mW/cm²`);
       // …and its total is the generating model's centre irradiance within the demo's noise (5 %).
       const total = await rowValue(card, 'Total over');
       const shown = Number(/([\d.,]+) mW\/cm²/.exec(total)![1].replace(',', ''));

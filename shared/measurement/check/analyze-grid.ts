@@ -10,7 +10,13 @@ import { groupPlanesByDistance } from '../plane/group-planes.ts';
 import { planeCoverage, type PlaneCoverage } from '../plane/plane-coverage.ts';
 import type { PlanePoint } from '../plane/plane-points.ts';
 import type { FootprintCm } from '../plane/uniformity.ts';
-import { falloffExponent, localFalloffExponents, type LocalFalloffExponent } from '../distance/falloff.ts';
+import {
+  falloffExponent,
+  localFalloffExponents,
+  pointFalloffExponents,
+  type LocalFalloffExponent,
+  type PointFalloffExponent,
+} from '../distance/falloff.ts';
 
 export interface GridReading {
   distanceCm: number;
@@ -41,6 +47,8 @@ export interface FalloffFigures {
   exponent: number | null;
   /** Chord exponents between adjacent measured distances. */
   local: LocalFalloffExponent[];
+  /** Exponent at each measured distance (−d ln E / d ln d from the neighbouring planes): the one a distance error goes through. */
+  point: PointFalloffExponent[];
 }
 
 export interface GridAnalysis {
@@ -65,11 +73,18 @@ export function analyzeGrid(readings: readonly GridReading[], options: GridAnaly
   const levelsPct = options.levelsPct ?? STANDARD_LEVELS_PCT;
   const planes = groupPlanesByDistance(readings).map(({ distanceCm, readings: rs }): GridPlane => {
     const points = rs.map((r) => ({ xCm: r.xCm, yCm: r.yCm, value: r.value }));
-    const analysis = analyzePlane(points, options.footprint ? { footprint: options.footprint, levelsPct } : { levelsPct });
     const coverage = planeCoverage(points, { levelsPct });
+    // The area-weighted footprint figures use the field the coverage map draws.
+    const analysis = analyzePlane(
+      points,
+      options.footprint ? { footprint: options.footprint, levelsPct, field: coverage.field } : { levelsPct },
+    );
     const isolineAtEdge = coverage.map ? coverage.isolines.map((iso) => isolineTouchesEdge(coverage.map!, iso.polygons)) : [];
     return { distanceCm, points, analysis, coverage, isolineAtEdge };
   });
   const centers = planes.map((p) => ({ distanceCm: p.distanceCm, center: p.analysis.center }));
-  return { planes, falloff: { exponent: falloffExponent(centers), local: localFalloffExponents(centers) } };
+  return {
+    planes,
+    falloff: { exponent: falloffExponent(centers), local: localFalloffExponents(centers), point: pointFalloffExponents(centers) },
+  };
 }

@@ -19,7 +19,7 @@ export interface MeterReadingsFileCheck extends GridAnalysis {
 export function checkMeterReadingsFile(bytes: Uint8Array, options: GridAnalysisOptions = {}): MeterReadingsFileCheck {
   const tooLarge = sizeIssue(bytes.byteLength);
   if (tooLarge) {
-    return { ok: false, encoding: null, result: null, issues: [tooLarge], planes: [], falloff: { exponent: null, local: [] } };
+    return { ok: false, encoding: null, result: null, issues: [tooLarge], planes: [], falloff: { exponent: null, local: [], point: [] } };
   }
   const decoded = decodeTextBytes(bytes);
   const result = importMeterReadings(decoded.text);

@@ -25,7 +25,7 @@ export interface SpectrumFileCheck {
   encoding: DecodedText['encoding'] | null;
   /** The importer's result; null when the file was not read. */
   result: SpectrumImport | null;
-  /** Decoding issues first, then the importer's. */
+  /** Decoding issues first, then the importer's, then the analysis's (e.g. `band_not_measured`). */
   issues: ImportIssue[];
   summary: SpectrumSummary | null;
 }
@@ -36,5 +36,11 @@ export function checkSpectrumFile(bytes: Uint8Array, options: SpectrumFileCheckO
   const decoded = decodeTextBytes(bytes);
   const result = importSpectrum(decoded.text, { unit: options.unit, unitPolicy: options.unitPolicy });
   const summary = result.ok && result.spectrum ? summarizeSpectrum(result.spectrum, options.bands ?? DEFAULT_BANDS) : null;
-  return { ok: summary !== null, encoding: decoded.encoding, result, issues: [...decoded.issues, ...result.issues], summary };
+  return {
+    ok: summary !== null,
+    encoding: decoded.encoding,
+    result,
+    issues: [...decoded.issues, ...result.issues, ...(summary?.issues ?? [])],
+    summary,
+  };
 }

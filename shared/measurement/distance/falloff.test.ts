@@ -1,11 +1,30 @@
 import { describe, expect, it } from 'vitest';
-import { centerAtDistance, falloffExponent, localFalloffExponents } from './falloff.ts';
+import { centerAtDistance, falloffExponent, localFalloffExponents, pointFalloffExponentAt, pointFalloffExponents } from './falloff.ts';
 import { cornerViewFactor } from '../geometry/view-factor.ts';
 
-// Howell's catalogue case B-3 (Siegel & Howell, Thermal Radiation Heat Transfer), checked
-// against its own published values in view-factor.test.ts.
+// Howell's catalogue case B-3 (Siegel & Howell, Thermal Radiation Heat Transfer); view-factor.test.ts
+// checks it against values computed from the formula and against numerical integration of the
+// defining integral.
 // Centre of an a×b rectangle: four corners of (a/2)×(b/2).
 const centerFactor = (a: number, b: number, c: number) => 4 * cornerViewFactor(a / 2, b / 2, c);
+
+/**
+ * n = −d ln F / d ln c of the B-3 corner factor, differentiated analytically. With X = a/c,
+ * Y = b/c, A = √(1+X²), B = √(1+Y²), S = 1+X²+Y² and g = (X/A)·atan(Y/A) + (Y/B)·atan(X/B):
+ * ∂g/∂X = atan(Y/A)/A³ + Y/(S·A²) (and the same with X, Y swapped), and since dX/d ln c = −X,
+ * n = [X·atan(Y/A)/A³ + Y·atan(X/B)/B³ + (XY/S)(1/A² + 1/B²)] / g. The centre of a W × H panel
+ * is four equal corners of W/2 × H/2, so it has the same n.
+ */
+function analyticPointExponent(a: number, b: number, c: number): number {
+  const x = a / c;
+  const y = b / c;
+  const A = Math.sqrt(1 + x * x);
+  const B = Math.sqrt(1 + y * y);
+  const S = 1 + x * x + y * y;
+  const g = (x / A) * Math.atan(y / A) + (y / B) * Math.atan(x / B);
+  const xgx = (x * Math.atan(y / A)) / A ** 3 + (y * Math.atan(x / B)) / B ** 3 + ((x * y) / S) * (1 / A ** 2 + 1 / B ** 2);
+  return xgx / g;
+}
 
 describe('falloffExponent', () => {
   it('is exactly 2 for a point source', () => {
@@ -134,5 +153,75 @@ describe('centerAtDistance', () => {
     expect(centerAtDistance(planes, 120, { extrapolate: true })).toBeCloseTo(planes[2].center * 2 ** -c, 12);
     expect(centerAtDistance(planes.slice(0, 1), 15)).toBeNull();
     expect(centerAtDistance(planes, 0)).toBeNull();
+  });
+});
+
+describe('pointFalloffExponents: the exponent at a measured distance', () => {
+  // 30 × 90 cm Lambertian panel, centre irradiance ∝ Howell B-3 factor (Siegel & Howell).
+  const panelCenter = (d: number) => centerFactor(30, 90, d);
+  const planesAt = (ds: number[]) => ds.map((d) => ({ distanceCm: d, center: panelCenter(d) }));
+
+  it('the analytic derivative of the view factor gives 0.544, 0.997, 1.483 and 1.967', () => {
+    // Reference: the analytic derivative above, checked against a fourth-order central difference
+    // of the B-3 closed form in ln c (numerical differentiation, step 1e-3 in ln c; computed).
+    for (const [d, n] of [
+      [15, 0.544],
+      [30, 0.997],
+      [60, 1.483],
+      [300, 1.967],
+    ]) {
+      const analytic = analyticPointExponent(15, 45, d);
+      const h = 1e-3;
+      const lnF = (t: number) => Math.log(cornerViewFactor(15, 45, d * Math.exp(t)));
+      const numeric = -(-lnF(2 * h) + 8 * lnF(h) - 8 * lnF(-h) + lnF(-2 * h)) / (12 * h);
+      expect(analytic).toBeCloseTo(numeric, 9);
+      expect(analytic).toBeCloseTo(n, 3);
+    }
+  });
+
+  it('at 15, 30 and 60 cm: within 0.02 of the analytic values, where the chord is 41 % high', () => {
+    // Analytic n = 0.5435, 0.9974, 1.4828 (B-3, above). Three-point estimates from the three planes
+    // (computed): 0.527 (one-sided), 1.004 (interior), 1.481 (one-sided).
+    const points = pointFalloffExponents(planesAt([60, 15, 30]));
+    expect(points.map((p) => [p.distanceCm, p.rule])).toEqual([
+      [15, 'end-three-point'],
+      [30, 'interior-three-point'],
+      [60, 'end-three-point'],
+    ]);
+    for (const p of points) expect(Math.abs(p.exponent - analyticPointExponent(15, 45, p.distanceCm))).toBeLessThan(0.02);
+    // The chord 15→30 cm is 0.765 (computed from B-3): 41 % above the point value 0.544 at 15 cm.
+    const chord = localFalloffExponents(planesAt([15, 30]))[0].exponent;
+    expect(chord).toBeCloseTo(0.765, 3);
+    expect(chord / analyticPointExponent(15, 45, 15)).toBeCloseTo(1.41, 2);
+    expect(Math.abs(points[0].exponent - 0.544)).toBeLessThan(Math.abs(chord - 0.544) / 10);
+  });
+
+  it('converges on the analytic derivative as the planes close in, second order on an uneven grid', () => {
+    // Interior three-point rule on uneven steps (13.5, 15, 17 cm, then halved): the error falls
+    // about fourfold per halving (second-order rule; reference: the analytic derivative above).
+    const error = (s: number) => {
+      const p = pointFalloffExponentAt(planesAt([15 - 1.5 * s, 15, 15 + 2 * s]), 15)!;
+      expect(p.rule).toBe('interior-three-point');
+      return Math.abs(p.exponent - analyticPointExponent(15, 45, 15));
+    };
+    expect(error(1)).toBeLessThan(0.005);
+    expect(error(1) / error(0.5)).toBeGreaterThan(3.5);
+    expect(error(1) / error(0.5)).toBeLessThan(4.5);
+    // End rule, same check (one-sided three points, second order).
+    const endError = (s: number) =>
+      Math.abs(pointFalloffExponentAt(planesAt([30, 30 + 2 * s, 30 + 3 * s]), 30)!.exponent - analyticPointExponent(15, 45, 30));
+    expect(endError(1) / endError(0.5)).toBeGreaterThan(3.5);
+    expect(endError(1) / endError(0.5)).toBeLessThan(4.5);
+  });
+
+  it('is exactly 2 for a point source, and the chord with only two distances', () => {
+    // Inverse-square law (computed): every rule is exact for a power law.
+    const point = [10, 17, 40, 55].map((d) => ({ distanceCm: d, center: 1e4 / (d * d) }));
+    for (const p of pointFalloffExponents(point)) expect(p.exponent).toBeCloseTo(2, 12);
+    const two = pointFalloffExponents(planesAt([15, 30]));
+    expect(two.map((p) => p.rule)).toEqual(['two-point', 'two-point']);
+    expect(two[0].exponent).toBeCloseTo(localFalloffExponents(planesAt([15, 30]))[0].exponent, 12);
+    expect(pointFalloffExponents(planesAt([15]))).toEqual([]);
+    expect(pointFalloffExponentAt(planesAt([15, 30, 60]), 45)).toBeNull();
   });
 });

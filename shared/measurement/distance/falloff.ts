@@ -69,6 +69,64 @@ export function localFalloffExponents(planes: readonly PlaneCenter[]): LocalFall
   return out;
 }
 
+/**
+ * How a point exponent was estimated from the planes around it, in u = ln d, f = ln E:
+ * - 'interior-three-point': the plane and its two neighbours, the three-point derivative on a
+ *   non-uniform grid, f′ ≈ −h₂/(h₁(h₁+h₂))·f₋ + (h₂−h₁)/(h₁h₂)·f₀ + h₁/(h₂(h₁+h₂))·f₊
+ *   (h₁ = ln dᵢ − ln dᵢ₋₁, h₂ = ln dᵢ₊₁ − ln dᵢ; second-order accurate);
+ * - 'end-three-point': the nearest or farthest plane and the next two, the one-sided three-point
+ *   derivative (second-order accurate, more sensitive to noise);
+ * - 'two-point': only two distances, the chord between them (first-order: it describes the
+ *   segment, not the point).
+ */
+export type PointExponentRule = 'interior-three-point' | 'end-three-point' | 'two-point';
+
+export interface PointFalloffExponent {
+  distanceCm: number;
+  /** n = −d ln E / d ln d at distanceCm; 2 for a point source. */
+  exponent: number;
+  rule: PointExponentRule;
+}
+
+/**
+ * Falloff exponent at each measured distance, n = −d ln E / d ln d, estimated from the
+ * neighbouring planes (rules above). This is the exponent that carries a distance error into
+ * irradiance at that distance; a chord exponent between two distances is not: for a
+ * 30 × 90 cm panel the 15→30 cm chord is 0.765, the point value at 15 cm 0.544.
+ * Repeats at one distance are averaged first; empty with fewer than 2 usable distances.
+ */
+export function pointFalloffExponents(planes: readonly PlaneCenter[]): PointFalloffExponent[] {
+  const pts = usablePoints(planes);
+  const n = pts.length;
+  if (n < 2) return [];
+  const u = pts.map((p) => Math.log(p.d));
+  const f = pts.map((p) => Math.log(p.e));
+  if (n === 2) {
+    const chord = -(f[1] - f[0]) / (u[1] - u[0]);
+    return pts.map((p) => ({ distanceCm: p.d, exponent: chord, rule: 'two-point' }));
+  }
+  return pts.map((p, i): PointFalloffExponent => {
+    if (i > 0 && i < n - 1) {
+      const h1 = u[i] - u[i - 1];
+      const h2 = u[i + 1] - u[i];
+      const slope = (-h2 / (h1 * (h1 + h2))) * f[i - 1] + ((h2 - h1) / (h1 * h2)) * f[i] + (h1 / (h2 * (h1 + h2))) * f[i + 1];
+      return { distanceCm: p.d, exponent: -slope, rule: 'interior-three-point' };
+    }
+    // One-sided: k steps towards the other planes (+1 from the nearest, −1 from the farthest).
+    const k = i === 0 ? 1 : -1;
+    const h1 = u[i + k] - u[i];
+    const h2 = u[i + 2 * k] - u[i + k];
+    const slope =
+      (-(2 * h1 + h2) / (h1 * (h1 + h2))) * f[i] + ((h1 + h2) / (h1 * h2)) * f[i + k] - (h1 / (h2 * (h1 + h2))) * f[i + 2 * k];
+    return { distanceCm: p.d, exponent: -slope, rule: 'end-three-point' };
+  });
+}
+
+/** The point exponent at a measured distance (within 1e-6 cm), or null when it was not measured. */
+export function pointFalloffExponentAt(planes: readonly PlaneCenter[], distanceCm: number): PointFalloffExponent | null {
+  return pointFalloffExponents(planes).find((p) => Math.abs(p.distanceCm - distanceCm) < 1e-6) ?? null;
+}
+
 export interface CenterAtDistanceOptions {
   /**
    * Beyond the measured range, continue the end segment's power law. Off by default: a panel's

@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { cornerViewFactor, panelViewFactor, rectangleViewFactor } from './view-factor.ts';
 
+// Every reference number in this file is computed: from the B-3 formula of Howell's catalogue (with
+// the signed split for off-corner receivers), from limiting cases, or by numerically integrating
+// the defining integral. None is a value read from a published table.
+
 /** Direct numerical integration of dF = c²·dA / (π r⁴) (definition of the differential-to-finite
  * factor, Siegel & Howell, Thermal Radiation Heat Transfer), midpoint rule. */
 function integratedFactor(x0: number, x1: number, y0: number, y1: number, c: number, n = 400): number {

@@ -25,8 +25,9 @@ describe('analyzePlane on a Lambertian 34 × 80 cm panel at 15 cm (view-factor g
       const points = gridPoints(rangeCm(-40, 40, spacingCm), rangeCm(-50, 50, 5), field);
       const a = analyzePlane(points, { footprint: { widthCm: 34, heightCm: 80 } });
       const [w80, w50, w25] = a.spreadWidths.map((w) => w.widthCm);
-      // Common practice, no source: at 15 cm from an emitting area about 34 cm wide, the 50 % level
-      // lies near the edge of the emitters and the 25 % level a few cm beyond (about 39 and 54 cm).
+      // Results of the view-factor model (Howell B-3, computed): at 15 cm from a 34 cm wide emitting
+      // area the 50 % level lies near the edge of the emitters and the 25 % level a few cm beyond
+      // (about 39 and 54 cm).
       expect(Math.abs(w50 - 39)).toBeLessThan(1);
       expect(Math.abs(w25 - 54)).toBeLessThan(1);
       expect(w50).toBeGreaterThan(34);

@@ -2,13 +2,16 @@ import { mergeRepeatedPoints, peakValue, POSITION_TOLERANCE_CM, type PlanePoint 
 import { selectSpreadRow, spreadWidthAlongRow, type SpreadWidth } from './spread-width.ts';
 import { STANDARD_LEVELS_PCT } from './levels.ts';
 import { footprintUniformity, type FootprintCm, type UniformityStats } from './uniformity.ts';
-
+import { footprintAreaUniformity, type FootprintAreaUniformity } from './footprint-area.ts';
+import { planeField, type PlaneField } from './interpolate.ts';
 
 export interface PlaneAnalysisOptions {
   /** Emitting area, cm; without it there are no footprint figures. */
   footprint?: FootprintCm;
   /** Spread-width levels, % of the peak; default 80, 50, 25. */
   levelsPct?: readonly number[];
+  /** The plane's interpolated field when the caller has it already (the coverage map's); built otherwise. */
+  field?: PlaneField;
 }
 
 export interface PlaneAnalysis {
@@ -23,7 +26,10 @@ export interface PlaneAnalysis {
   spreadWidths: SpreadWidth[];
   /** Levels (%) whose width ran into the end of the measured row. */
   widthAtEdge: number[];
+  /** Uniformity of the readings inside the emitting area, each reading weighing the same. */
   footprint: UniformityStats | null;
+  /** Uniformity of the interpolated field over the emitting area, area-weighted: the headline figures. */
+  footprintArea: FootprintAreaUniformity | null;
 }
 
 /** Scalar figures of one plane. Readings in any one irradiance unit; results in that unit. */
@@ -44,5 +50,8 @@ export function analyzePlane(points: readonly PlanePoint[], options: PlaneAnalys
     spreadWidths,
     widthAtEdge: spreadWidths.filter((w) => w.atEdge).map((w) => w.pct),
     footprint: options.footprint ? footprintUniformity(merged, options.footprint) : null,
+    footprintArea: options.footprint
+      ? footprintAreaUniformity(options.field ?? planeField(merged), merged, options.footprint)
+      : null,
   };
 }

@@ -28,7 +28,8 @@ describe('uniformityStats', () => {
   });
 
   it('non-uniformity (max − min)/(max + min) = 20 %', () => {
-    // IEC 61836 3.4.54 (as used by IEC 60904-9): (120 − 80)/(120 + 80) × 100 = 20 %.
+    // Non-uniformity of irradiance as IEC 60904-9 (solar simulator classification) defines it:
+    // (120 − 80)/(120 + 80) × 100 = 20 %.
     expect(uniformityStats(values).nonUniformityPct).toBeCloseTo(20, 12);
   });
 

@@ -8,7 +8,7 @@ export interface UniformityStats {
   minOverMax: number | null;
   /** Coefficient of variation with the population standard deviation. */
   cv: number | null;
-  /** (E_max − E_min) / (E_max + E_min) × 100 (IEC 61836 3.4.54, as used by IEC 60904-9). */
+  /** (E_max − E_min) / (E_max + E_min) × 100: non-uniformity of irradiance as IEC 60904-9 defines it. */
   nonUniformityPct: number | null;
 }
 
@@ -39,7 +39,10 @@ export interface FootprintCm {
   heightCm: number;
 }
 
-/** Uniformity over the readings with |x| ≤ W/2 and |y| ≤ H/2 (edges included). */
+/**
+ * Uniformity over the readings with |x| ≤ W/2 and |y| ≤ H/2 (edges included), each reading
+ * weighing the same; footprint-area.ts gives the area-weighted figures of the whole area.
+ */
 export function footprintUniformity(points: readonly PlanePoint[], footprint: FootprintCm): UniformityStats {
   const halfW = footprint.widthCm / 2 + POSITION_TOLERANCE_CM;
   const halfH = footprint.heightCm / 2 + POSITION_TOLERANCE_CM;

@@ -7,6 +7,8 @@ import {
   skinThermalPermissibleSeconds,
 } from './infrared-eye.ts';
 
+const WHOLE_BAND = { loNm: 780, hiNm: 3000 };
+
 // IEC 62471:2006 (= CIE S 009) infrared radiation hazard to the eye, 780–3000 nm:
 // E_IR ≤ 18000·t^−0.75 W/m² for t ≤ 1000 s, ≤ 100 W/m² beyond (formula from memory, consistent
 // with a transcription of IEC 62471:2006). Times below are computed from it.
@@ -19,32 +21,45 @@ describe('infrared eye limit', () => {
   });
 
   it('permits 118.9 s at 500 W/m² and 10.0 s at 3200 W/m²', () => {
-    expect(irEyePermissibleSeconds(500, 3000).maxSeconds).toBeCloseTo(118.9, 1);
-    expect(irEyePermissibleSeconds(3200, 3000).maxSeconds).toBeCloseTo(10.0, 1);
-    expect(irEyePermissibleSecondsFromMwCm2(50, 3000).maxSeconds).toBeCloseTo(118.9, 1);
+    expect(irEyePermissibleSeconds(500, WHOLE_BAND).maxSeconds).toBeCloseTo(118.9, 1);
+    expect(irEyePermissibleSeconds(3200, WHOLE_BAND).maxSeconds).toBeCloseTo(10.0, 1);
+    expect(irEyePermissibleSecondsFromMwCm2(50, WHOLE_BAND).maxSeconds).toBeCloseTo(118.9, 1);
   });
 
   it('sets no limit at or below 100 W/m² and caps just above it at 1000 s', () => {
-    const at100 = irEyePermissibleSeconds(100, 3000);
+    const at100 = irEyePermissibleSeconds(100, WHOLE_BAND);
     expect(at100.maxSeconds).toBeNull();
     expect(at100.reason).toMatch(/no time limit/);
-    // (18000/100.5)^(4/3) = 1008 s > 1000 s, so the 100 W/m² limit governs (computed).
-    expect(irEyePermissibleSeconds(100.5, 3000).maxSeconds).toBe(1000);
-    expect(irEyePermissibleSeconds(101.3, 3000).maxSeconds!).toBeLessThan(1000);
-    expect(irEyePermissibleSeconds(101.3, 3000).maxSeconds!).toBeGreaterThan(998); // 998.97 s (computed)
+    // (18000/100.5)^(4/3) = 1009.6 s > 1000 s, so the 100 W/m² limit governs (computed).
+    expect((18000 / 100.5) ** (4 / 3)).toBeCloseTo(1009.6, 1);
+    expect(irEyePermissibleSeconds(100.5, WHOLE_BAND).maxSeconds).toBe(1000);
+    // Just above 100 W/m² the formula gives up to (18000/100)^(4/3) = 1016.3 s (computed): still capped.
+    expect((18000 / 100) ** (4 / 3)).toBeCloseTo(1016.3, 1);
+    expect(irEyePermissibleSeconds(100.0001, WHOLE_BAND).maxSeconds).toBe(1000);
+    expect(irEyePermissibleSeconds(101.3, WHOLE_BAND).maxSeconds!).toBeLessThan(1000);
+    expect(irEyePermissibleSeconds(101.3, WHOLE_BAND).maxSeconds!).toBeGreaterThan(998); // 998.97 s (computed)
   });
 
   it('flags an instrument that stops short of 3000 nm', () => {
-    const r = irEyePermissibleSeconds(500, 1050);
+    // The hazard band is 780–3000 nm (IEC 62471, from memory): infrared past the instrument is not counted.
+    const r = irEyePermissibleSeconds(500, { loNm: 350, hiNm: 1050 });
     expect(r.underReads).toBe(true);
-    expect(r.underReadsNote).toMatch(/1050 nm.*under-reads/);
+    expect(r.underReadsNote).toMatch(/1050–3000 nm.*under-reads/);
     expect(r.label).toMatch(/Screening estimate/);
-    expect(irEyePermissibleSeconds(500, 3000).underReads).toBe(false);
-    expect(irEyePermissibleSeconds(500, 3000).underReadsNote).toBeNull();
+    expect(irEyePermissibleSeconds(500, WHOLE_BAND).underReads).toBe(false);
+    expect(irEyePermissibleSeconds(500, WHOLE_BAND).underReadsNote).toBeNull();
+  });
+
+  it('flags a range that starts above 780 nm as well', () => {
+    // Same band (IEC 62471, from memory): 780–800 nm is part of it and was not measured.
+    const r = irEyePermissibleSeconds(500, { loNm: 800, hiNm: 3000 });
+    expect(r.underReads).toBe(true);
+    expect(r.underReadsNote).toMatch(/780–800 nm.*under-reads/);
+    expect(irEyePermissibleSeconds(500, { loNm: 800, hiNm: 1050 }).underReadsNote).toMatch(/780–800 nm and 1050–3000 nm/);
   });
 
   it('gives no time for invalid input', () => {
-    expect(irEyePermissibleSeconds(Number.NaN, 1050).maxSeconds).toBeNull();
+    expect(irEyePermissibleSeconds(Number.NaN, { loNm: 350, hiNm: 1050 }).maxSeconds).toBeNull();
     expect(() => irEyeLimitWm2(0)).toThrow(RangeError);
   });
 });

@@ -4,16 +4,30 @@
  * risk-group classification: measured at the bench distance, not the standard's, and with
  * whatever the instrument sees of the band.
  */
+import type { WavelengthBand } from '../spectral/spectrum.ts';
 
-/** Upper end of the eye's infrared hazard band, nm. */
-export const IR_EYE_BAND_END_NM = 3000;
+/** The eye's infrared hazard band, nm. Not the near-infrared reporting band (700–1100 nm). */
+export const IR_EYE_BAND: Readonly<WavelengthBand> = { loNm: 780, hiNm: 3000 };
 
 export const SCREENING_LABEL = 'Screening estimate (IEC 62471 infrared eye limit); not a risk-group classification.';
 
-export function underReadsSentence(instrumentMaxNm: number): string {
+/** The parts of 780–3000 nm outside a measured range, low end first. */
+export function unmeasuredIrEyeParts(measuredNm: WavelengthBand): WavelengthBand[] {
+  const { loNm, hiNm } = IR_EYE_BAND;
+  if (!(measuredNm.hiNm > loNm && measuredNm.loNm < hiNm)) return [{ loNm, hiNm }];
+  const parts: WavelengthBand[] = [];
+  if (measuredNm.loNm > loNm) parts.push({ loNm, hiNm: measuredNm.loNm });
+  if (measuredNm.hiNm < hiNm) parts.push({ loNm: measuredNm.hiNm, hiNm });
+  return parts;
+}
+
+export function underReadsSentence(measuredNm: WavelengthBand): string {
+  const missing = unmeasuredIrEyeParts(measuredNm)
+    .map((p) => `${p.loNm}–${p.hiNm} nm`)
+    .join(' and ');
   return (
-    `The instrument reads only up to ${instrumentMaxNm} nm, so infrared between ${instrumentMaxNm} and ` +
-    `${IR_EYE_BAND_END_NM} nm is not counted and this estimate under-reads: the permissible time may be shorter.`
+    `The instrument reads ${measuredNm.loNm}–${measuredNm.hiNm} nm, so infrared in ${missing} is not counted ` +
+    'and this estimate under-reads: the permissible time may be shorter.'
   );
 }
 
@@ -29,27 +43,29 @@ export interface IrEyeScreening {
   /** Longest exposure within the limit, s; null when no limit applies (see `reason`). */
   maxSeconds: number | null;
   reason: string;
+  /** True when the measured range misses part of 780–3000 nm, at either end. */
   underReads: boolean;
   underReadsNote: string | null;
 }
 
 /**
- * Permissible exposure time for an infrared irradiance E_IR (780–3000 nm, W/m²).
+ * Permissible exposure time for an infrared irradiance E_IR (780–3000 nm, W/m²) measured over
+ * `measuredNm`; a range that starts above 780 nm or stops below 3000 nm is flagged as under-reading.
  * t = (18000/E)^(4/3) inverts the short-time limit. The two pieces do not meet: at 1000 s the
  * short-time limit is 18000·1000^−0.75 = 101.2 W/m², the long-time one 100 W/m². So
  * - E ≤ 100 W/m²: no limit (the long-time limit is met indefinitely): maxSeconds null;
- * - 100 < E ≤ 101.2 W/m²: the formula gives 1000–1014.6 s, but any t > 1000 s falls under the
+ * - 100 < E ≤ 101.2 W/m²: the formula gives 1000–1016.3 s, but any t > 1000 s falls under the
  *   100 W/m² limit, so the answer is capped at 1000 s;
  * - E > 101.2 W/m²: (18000/E)^(4/3) s, below 1000 s.
  * The result jumps from 1000 s to "no limit" at exactly 100 W/m²; that step is the standard's.
  */
-export function irEyePermissibleSeconds(eIrWm2: number, instrumentMaxNm: number): IrEyeScreening {
-  const underReads = instrumentMaxNm < IR_EYE_BAND_END_NM;
+export function irEyePermissibleSeconds(eIrWm2: number, measuredNm: WavelengthBand): IrEyeScreening {
+  const underReads = measuredNm.loNm > IR_EYE_BAND.loNm || measuredNm.hiNm < IR_EYE_BAND.hiNm;
   const base = {
     label: SCREENING_LABEL,
     eIrWm2,
     underReads,
-    underReadsNote: underReads ? underReadsSentence(instrumentMaxNm) : null,
+    underReadsNote: underReads ? underReadsSentence(measuredNm) : null,
   };
   if (!Number.isFinite(eIrWm2) || eIrWm2 < 0) {
     return { ...base, maxSeconds: null, reason: 'No valid infrared irradiance to screen.' };
@@ -73,8 +89,8 @@ export function irEyePermissibleSeconds(eIrWm2: number, instrumentMaxNm: number)
 }
 
 /** Same as irEyePermissibleSeconds with E_IR in mW/cm² (1 mW/cm² = 10 W/m²). */
-export function irEyePermissibleSecondsFromMwCm2(eIrMwCm2: number, instrumentMaxNm: number): IrEyeScreening {
-  return irEyePermissibleSeconds(eIrMwCm2 * 10, instrumentMaxNm);
+export function irEyePermissibleSecondsFromMwCm2(eIrMwCm2: number, measuredNm: WavelengthBand): IrEyeScreening {
+  return irEyePermissibleSeconds(eIrMwCm2 * 10, measuredNm);
 }
 
 /** Skin thermal limit on radiant exposure, J/m², 380–3000 nm: 20000·t^0.25 for t < 10 s; null beyond. */

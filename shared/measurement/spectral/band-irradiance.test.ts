@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { bandIrradianceWm2, bandShares, totalIrradianceWm2 } from './band-irradiance.ts';
 import { DEFAULT_BANDS, parseBandList } from './band-list.ts';
+import { summarizeSpectrum } from './spectrum-summary.ts';
 
 const flat = { wavelengthNm: [600, 650, 700, 750, 800], irradianceWm2Nm: [0.01, 0.01, 0.01, 0.01, 0.01] };
 
@@ -15,7 +16,20 @@ describe('bandIrradianceWm2', () => {
     const nir = bandIrradianceWm2(flat, DEFAULT_BANDS.nir);
     expect(nir).toMatchObject({ loNm: 700, hiNm: 1100, partial: true });
     expect(nir.wm2).toBeCloseTo(1, 12);
-    expect(bandIrradianceWm2(flat, { loNm: 300, hiNm: 400 })).toEqual({ loNm: 300, hiNm: 400, wm2: 0, partial: true });
+  });
+
+  it('gives no figure (null, not 0) for a band wholly outside the measured range', () => {
+    // Nothing of 300–400 nm or 900–1000 nm was measured: unknown, not "no emission" (definition).
+    expect(bandIrradianceWm2(flat, { loNm: 300, hiNm: 400 })).toEqual({ loNm: 300, hiNm: 400, wm2: null, partial: true });
+    expect(bandIrradianceWm2(flat, { loNm: 900, hiNm: 1000 }).wm2).toBeNull();
+    // Touching the range at one wavelength measures no width of the band either.
+    expect(bandIrradianceWm2(flat, { loNm: 800, hiNm: 900 }).wm2).toBeNull();
+    // The summary says so with a stable code, and gives the band no share of the total.
+    const summary = summarizeSpectrum(flat, { red: DEFAULT_BANDS.red, uv: { loNm: 300, hiNm: 400 } });
+    expect(summary.bands.uv.wm2).toBeNull();
+    expect(summary.bandShares.uv).toBeNull();
+    expect(summary.issues.map((i) => [i.code, i.severity, i.line])).toEqual([['band_not_measured', 'warning', null]]);
+    expect(summary.issues[0].message).toMatch(/"uv" \(300–400 nm\).*600–800 nm.*not measured/);
   });
 
   it('integrates signed values: noise below zero is not clipped', () => {

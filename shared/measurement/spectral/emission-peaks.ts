@@ -4,6 +4,12 @@
  * the two lowest points separating it from a higher peak or the end of the range) both reach a
  * fraction of the spectrum's maximum; peaks closer than a minimum separation keep the higher one.
  * Samples at the ends of the range are not peaks (the line may continue past the range).
+ *
+ * Centroid wavelength as CIE 127 defines it for LEDs: λc = ∫λE dλ / ∫E dλ over the whole
+ * emission line. A line's extent runs from the lowest sample between it and the neighbouring
+ * reported peak on each side, or to the end of the range where there is no neighbour, so two
+ * lines of one spectrum do not share their light. The half-maximum window's mean wavelength is
+ * kept beside it under its own name: on a skewed line the two differ.
  */
 import type { SpectrumSamples } from './spectrum.ts';
 import { integrateTrapezoid } from './trapezoid.ts';
@@ -17,8 +23,16 @@ export interface EmissionPeak {
   halfMaxHiNm: number | null;
   /** Full width at half maximum, nm; null when a crossing is missing. */
   fwhmNm: number | null;
-  /** Irradiance-weighted mean wavelength over the half-maximum window (∫λE dλ / ∫E dλ); null when cut off. */
+  /**
+   * Centroid wavelength (CIE 127): ∫λE dλ / ∫E dλ over the whole line, centroidFromNm to
+   * centroidToNm; null when the line is cut off by the range (a half-maximum point is missing).
+   */
   centroidNm: number | null;
+  /** Integration limits of the centroid: the line's extent (see the file comment), nm. */
+  centroidFromNm: number;
+  centroidToNm: number;
+  /** ∫λE dλ / ∫E dλ over the half-maximum window only; null when cut off. Not the CIE centroid. */
+  halfMaxCentroidNm: number | null;
 }
 
 export interface PeakOptions {
@@ -66,7 +80,28 @@ export function findEmissionPeaks(spectrum: SpectrumSamples, options: PeakOption
     if (kept.every((k) => Math.abs(wl[k.index] - wl[c.index]) >= minSeparationNm)) kept.push(c);
   }
   kept.sort((a, b) => a.index - b.index);
-  return kept.map(({ index, prominence }) => describePeak(spectrum, index, prominence));
+  return kept.map(({ index, prominence }, k) => {
+    const from = k === 0 ? 0 : lowestBetween(e, kept[k - 1].index, index);
+    const to = k === kept.length - 1 ? n - 1 : lowestBetween(e, index, kept[k + 1].index);
+    return describePeak(spectrum, index, prominence, from, to);
+  });
+}
+
+/** Index of the lowest sample strictly between two peaks (the first of equals). */
+function lowestBetween(e: ArrayLike<number>, left: number, right: number): number {
+  let best = left + 1;
+  for (let k = left + 2; k < right; k++) if (e[k] < e[best]) best = k;
+  return best;
+}
+
+/** ∫λE dλ / ∫E dλ over [loNm, hiNm]; null when the area is not positive. */
+function meanWavelength(spectrum: SpectrumSamples, loNm: number, hiNm: number): number | null {
+  const wl = spectrum.wavelengthNm;
+  const e = spectrum.irradianceWm2Nm;
+  const weighted = new Float64Array(e.length);
+  for (let i = 0; i < e.length; i++) weighted[i] = e[i] * wl[i];
+  const area = integrateTrapezoid(wl, e, loNm, hiNm);
+  return area > 0 ? integrateTrapezoid(wl, weighted, loNm, hiNm) / area : null;
 }
 
 /** Height minus the higher of the lowest points on each side before a higher sample. */
@@ -79,7 +114,7 @@ function prominenceAt(e: ArrayLike<number>, first: number, last: number): number
   return height - Math.max(leftMin, rightMin);
 }
 
-function describePeak(spectrum: SpectrumSamples, index: number, prominence: number): EmissionPeak {
+function describePeak(spectrum: SpectrumSamples, index: number, prominence: number, from: number, to: number): EmissionPeak {
   const wl = spectrum.wavelengthNm;
   const e = spectrum.irradianceWm2Nm;
   const half = e[index] / 2;
@@ -97,13 +132,7 @@ function describePeak(spectrum: SpectrumSamples, index: number, prominence: numb
       break;
     }
   }
-  let centroidNm: number | null = null;
-  if (lo !== null && hi !== null) {
-    const weighted = new Float64Array(e.length);
-    for (let i = 0; i < e.length; i++) weighted[i] = e[i] * wl[i];
-    const area = integrateTrapezoid(wl, e, lo, hi);
-    if (area > 0) centroidNm = integrateTrapezoid(wl, weighted, lo, hi) / area;
-  }
+  const halfMaxCentroidNm = lo !== null && hi !== null ? meanWavelength(spectrum, lo, hi) : null;
   return {
     peakNm: wl[index],
     peakWm2Nm: e[index],
@@ -111,6 +140,10 @@ function describePeak(spectrum: SpectrumSamples, index: number, prominence: numb
     halfMaxLoNm: lo,
     halfMaxHiNm: hi,
     fwhmNm: lo !== null && hi !== null ? hi - lo : null,
-    centroidNm,
+    // Without both half-maximum points the line runs past the range: no centroid of it either.
+    centroidNm: lo !== null && hi !== null ? meanWavelength(spectrum, wl[from], wl[to]) : null,
+    centroidFromNm: wl[from],
+    centroidToNm: wl[to],
+    halfMaxCentroidNm,
   };
 }

@@ -1,6 +1,13 @@
 /** Every figure the analysis gives for one spectrum, in the units its names state. */
+import type { ImportIssue } from '../import/import-issue.ts';
 import type { SpectrumSamples, WavelengthBand } from './spectrum.ts';
-import { bandIrradianceWm2, bandShares, totalIrradianceWm2, type BandIrradiance } from './band-irradiance.ts';
+import {
+  bandIrradianceWm2,
+  bandNotMeasuredIssue,
+  bandShares,
+  totalIrradianceWm2,
+  type BandIrradiance,
+} from './band-irradiance.ts';
 import { photonFluxUmolM2S } from './photon-flux.ts';
 import { findEmissionPeaks, peakWavelengthNm, type EmissionPeak, type PeakOptions } from './emission-peaks.ts';
 
@@ -13,6 +20,8 @@ export interface SpectrumSummary {
   bands: Record<string, BandIrradiance>;
   bandShares: Record<string, number | null>;
   peaks: EmissionPeak[];
+  /** What the analysis found about the figures asked for, e.g. a band with no measured part (`band_not_measured`). */
+  issues: ImportIssue[];
 }
 
 export function summarizeSpectrum(
@@ -21,17 +30,24 @@ export function summarizeSpectrum(
   peakOptions?: PeakOptions,
 ): SpectrumSummary {
   const wl = spectrum.wavelengthNm;
+  const rangeNm: [number, number] = [wl[0], wl[wl.length - 1]];
   const totalWm2 = totalIrradianceWm2(spectrum);
   const bandResults: Record<string, BandIrradiance> = Object.create(null) as Record<string, BandIrradiance>;
-  for (const name of Object.keys(bands)) bandResults[name] = bandIrradianceWm2(spectrum, bands[name]);
+  const issues: ImportIssue[] = [];
+  for (const name of Object.keys(bands)) {
+    const result = bandIrradianceWm2(spectrum, bands[name]);
+    bandResults[name] = result;
+    if (result.wm2 === null) issues.push(bandNotMeasuredIssue(name, bands[name], rangeNm));
+  }
   return {
     samples: wl.length,
-    rangeNm: [wl[0], wl[wl.length - 1]],
+    rangeNm,
     totalWm2,
     peakNm: peakWavelengthNm(spectrum),
     photonFluxUmolM2S: photonFluxUmolM2S(spectrum),
     bands: bandResults,
     bandShares: bandShares(bandResults, totalWm2),
     peaks: findEmissionPeaks(spectrum, peakOptions),
+    issues,
   };
 }

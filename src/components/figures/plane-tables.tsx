@@ -15,12 +15,34 @@ function Row({ label, children }: { label: string; children: ReactNode }) {
       <th scope="row" className="border-b border-rule px-3 py-2 text-left align-top font-sans text-sm font-semibold text-ink-soft">
         {label}
       </th>
-      <td className={td}>{children}</td>
+      <td colSpan={2} className={td}>
+        {children}
+      </td>
     </tr>
   );
 }
 
-/** Peak, centre and, when an emitting area is given, the uniformity inside it. */
+/** One uniformity figure: over the area (the headline) and from the readings alone, side by side. */
+function UniformityRow({ label, area, readings }: { label: string; area: ReactNode; readings: ReactNode }) {
+  return (
+    <tr>
+      <th scope="row" className="border-b border-rule px-3 py-2 text-left align-top font-sans text-sm font-semibold text-ink-soft">
+        {label}
+      </th>
+      <td className={`${td} font-semibold`}>{area}</td>
+      <td className={`${td} text-ink-soft`}>{readings}</td>
+    </tr>
+  );
+}
+
+const ratio = (v: number | null | undefined) => (v === null || v === undefined ? '—' : formatFigure(v));
+const percentOf = (v: number | null | undefined) => (v === null || v === undefined ? '—' : formatPercent(v));
+const pct = (v: number | null | undefined) => (v === null || v === undefined ? '—' : `${formatFigure(v)} %`);
+
+/**
+ * Peak, centre and, when an emitting area is given, the uniformity inside it: first from the
+ * interpolated map, area-weighted (comparable across grids), then from the readings alone.
+ */
 export function PlaneFiguresTable({
   analysis,
   distanceCm,
@@ -31,36 +53,59 @@ export function PlaneFiguresTable({
   footprint: FootprintCm | null;
 }) {
   const u = analysis.footprint;
+  const a = analysis.footprintArea;
   return (
-    <table className="w-full border-collapse">
-      <caption className="pb-2 text-left font-sans text-sm font-semibold text-ink">
-        Plane at {formatLength(distanceCm)} cm
-      </caption>
-      <tbody>
-        <Row label="Measured positions">{analysis.points}</Row>
-        <Row label="Peak">{analysis.peak === null ? '—' : <Irradiance mwCm2={analysis.peak} />}</Row>
-        <Row label="Centre (x 0, y 0)">
-          {analysis.center === null ? <span className="text-ink-muted">not measured</span> : <Irradiance mwCm2={analysis.center} />}
-        </Row>
-        {footprint && u ? (
-          <>
-            <Row label={`Readings inside ${formatLength(footprint.widthCm)} × ${formatLength(footprint.heightCm)} cm`}>
-              {u.points}
-            </Row>
-            <Row label="Minimum / mean (U₀)">{u.minOverMean === null ? '—' : formatFigure(u.minOverMean)}</Row>
-            <Row label="Minimum / maximum">{u.minOverMax === null ? '—' : formatFigure(u.minOverMax)}</Row>
-            <Row label="Coefficient of variation">{u.cv === null ? '—' : formatPercent(u.cv)}</Row>
-            <Row label="Non-uniformity (max − min) / (max + min)">
-              {u.nonUniformityPct === null ? '—' : `${formatFigure(u.nonUniformityPct)} %`}
-            </Row>
-          </>
-        ) : (
-          <Row label="Uniformity over the emitting area">
-            <span className="text-ink-muted">Give the emitting area (W × H) above to see it.</span>
+    <div className="space-y-3">
+      <table className="w-full border-collapse">
+        <caption className="pb-2 text-left font-sans text-sm font-semibold text-ink">
+          Plane at {formatLength(distanceCm)} cm
+        </caption>
+        <tbody>
+          <Row label="Measured positions">{analysis.points}</Row>
+          <Row label="Peak">{analysis.peak === null ? '—' : <Irradiance mwCm2={analysis.peak} />}</Row>
+          <Row label="Centre (x 0, y 0)">
+            {analysis.center === null ? <span className="text-ink-muted">not measured</span> : <Irradiance mwCm2={analysis.center} />}
           </Row>
-        )}
-      </tbody>
-    </table>
+          {footprint && u ? (
+            <>
+              <tr>
+                <th scope="col" className={th}>
+                  Uniformity over {formatLength(footprint.widthCm)} × {formatLength(footprint.heightCm)} cm
+                </th>
+                <th scope="col" className={th}>
+                  Over the area (map, area-weighted)
+                </th>
+                <th scope="col" className={th}>
+                  Readings only ({u.points} inside)
+                </th>
+              </tr>
+              <UniformityRow label="Minimum / mean (U₀)" area={ratio(a?.minOverMean)} readings={ratio(u.minOverMean)} />
+              <UniformityRow label="Minimum / maximum" area={ratio(a?.minOverMax)} readings={ratio(u.minOverMax)} />
+              <UniformityRow label="Coefficient of variation" area={percentOf(a?.cv)} readings={percentOf(u.cv)} />
+              <UniformityRow
+                label="Non-uniformity (max − min) / (max + min)"
+                area={pct(a?.nonUniformityPct)}
+                readings={pct(u.nonUniformityPct)}
+              />
+              {a && a.coveredShare < 1 ? <Row label="Area the readings cover">{formatPercent(a.coveredShare)}</Row> : null}
+            </>
+          ) : (
+            <Row label="Uniformity over the emitting area">
+              <span className="text-ink-muted">Give the emitting area (W × H) above to see it.</span>
+            </Row>
+          )}
+        </tbody>
+      </table>
+      {footprint && a && a.issues.length > 0 ? (
+        <ul aria-label={`Uniformity warnings at ${formatLength(distanceCm)} cm`} className="space-y-1">
+          {a.issues.map((i) => (
+            <li key={i.code} className="font-sans text-xs text-warn">
+              {i.message}
+            </li>
+          ))}
+        </ul>
+      ) : null}
+    </div>
   );
 }
 

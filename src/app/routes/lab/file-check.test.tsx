@@ -87,6 +87,22 @@ describe('file check page', () => {
     expect(screen.getByText('Checked 1 spectrum file: 1 readable, 0 rejected.')).toBeTruthy();
   });
 
+  it('says "not measured", not 0, for a band the file does not reach', async () => {
+    // 400–590 nm only: nothing of red (600–700 nm) or near-infrared (700–1100 nm) was measured.
+    const { user } = openPage();
+    const rows = ['Wavelength (nm),Irradiance (W/m2/nm)'];
+    for (let nm = 400; nm <= 590; nm += 10) rows.push(`${nm},1`);
+    await user.upload(await screen.findByLabelText('Spectrum files', {}, slow), new File([`${rows.join('\n')}\n`], 'blue.csv'));
+    const card = (await screen.findByRole('heading', { level: 3, name: /blue\.csv/ }, slow)).closest('section')!;
+    expect(await within(card).findByText('Readable', {}, slow)).toBeTruthy();
+    const figures = within(card).getByRole('table', { name: 'Figures for blue.csv' });
+    const red = within(figures).getByRole('rowheader', { name: 'Red (600–700 nm)' }).closest('tr')!.textContent;
+    expect(red).toContain('not measured');
+    expect(red).not.toContain('mW/cm²');
+    expect(red).toContain('does not reach this band at all');
+    expect(within(card).getAllByText(/lies wholly outside the measured range 400–590 nm/)).toHaveLength(2);
+  });
+
   it('shows an invalid file as rejected with its error and line', async () => {
     const { user } = openPage();
     const input = await screen.findByLabelText('Spectrum files', {}, slow);
@@ -135,11 +151,31 @@ describe('file check page', () => {
     expect(figures.textContent).toContain('(1,000 W/m²)');
     expect(screen.getByText(/Falloff exponent across the planes/).textContent).toContain('2.00');
 
-    // Uniformity appears once an emitting area is given: U₀ = 36 / (484 / 9) = 0.669.
+    // Uniformity appears once an emitting area is given. Readings only: U₀ = 36 / (484 / 9) = 0.669.
+    // Over the area (the headline, first): the bilinear map's mean over each 10 × 10 cm cell is the
+    // mean of its corners, (100 + 60 + 60 + 36)/4 = 64, so U₀ = 36/64 = 0.5625 (hand-computed).
     await user.type(screen.getByLabelText('W (cm)'), '20');
     await user.type(screen.getByLabelText('H (cm)'), '20');
-    const u0 = within(screen.getByRole('table', { name: 'Plane at 10 cm' })).getByRole('rowheader', { name: 'Minimum / mean (U₀)' });
+    const planeTable = screen.getByRole('table', { name: 'Plane at 10 cm' });
+    const u0 = within(planeTable).getByRole('rowheader', { name: 'Minimum / mean (U₀)' });
     expect(u0.closest('tr')!.textContent).toContain('0.669');
+    const [areaCell, readingsCell] = [...u0.closest('tr')!.querySelectorAll('td')].map((td) => td.textContent);
+    expect(areaCell).toBe('0.563');
+    expect(readingsCell).toBe('0.669');
+    expect(within(planeTable).getByRole('columnheader', { name: 'Over the area (map, area-weighted)' })).toBeTruthy();
+    expect(within(planeTable).getByRole('columnheader', { name: 'Readings only (9 inside)' })).toBeTruthy();
+    // Readings lie on every edge of the 20 × 20 cm area: no warning.
+    expect(screen.queryByRole('list', { name: 'Uniformity warnings at 10 cm' })).toBeNull();
+    // A wider area than the grid: the map covers 400/900 of it, and the page says both things.
+    await user.clear(screen.getByLabelText('W (cm)'));
+    await user.clear(screen.getByLabelText('H (cm)'));
+    await user.type(screen.getByLabelText('W (cm)'), '30');
+    await user.type(screen.getByLabelText('H (cm)'), '30');
+    const warnings = screen.getByRole('list', { name: 'Uniformity warnings at 10 cm' });
+    expect(warnings.textContent).toMatch(/No reading lies on or within 0.5 cm/);
+    expect(warnings.textContent).toMatch(/cover 44.4 % of the 30 × 30 cm emitting area/);
+    const covered = within(screen.getByRole('table', { name: 'Plane at 10 cm' })).getByRole('rowheader', { name: 'Area the readings cover' });
+    expect(covered.closest('tr')!.textContent).toContain('44.4 %');
 
     await user.click(screen.getByRole('radio', { name: '20 cm' }));
     expect(screen.getByRole('table', { name: 'Spread widths and areas at 20 cm' })).toBeTruthy();

@@ -47,7 +47,8 @@ export function MeterCheckSection() {
         <fieldset className="space-y-3">
           <legend className="mb-1 font-sans text-sm font-semibold text-ink">Emitting area (optional)</legend>
           <p className="font-sans text-xs text-ink-muted">
-            Width along x and height along y, centred on the grid origin: gives the uniformity of the readings inside it.
+            Width along x and height along y, centred on the grid origin: gives the uniformity over it, from the
+            coverage map (area-weighted), and of the readings inside it.
           </p>
           <div className="grid grid-cols-2 gap-3">
             <TextField

@@ -29,7 +29,6 @@ function Row({ label, children }: { label: string; children: ReactNode }) {
 function partialNote(band: BandIrradiance, [lo, hi]: [number, number]): string {
   const from = Math.max(band.loNm, lo);
   const to = Math.min(band.hiNm, hi);
-  if (!(to > from)) return 'The file does not reach this band at all, so nothing of it was measured.';
   return (
     `The file covers ${formatLength(lo)}–${formatLength(hi)} nm, so only ` +
     `${formatLength(from)}–${formatLength(to)} nm of it was integrated. Light outside the file's range is missing, so the true figure may be higher.`
@@ -76,11 +75,20 @@ export function SpectrumFigures({
         <Row label="Wavelength range">{range}</Row>
         {Object.entries(summary.bands).map(([name, band]) => (
           <Row key={name} label={`${BAND_LABELS[name] ?? name} (${formatLength(band.loNm)}–${formatLength(band.hiNm)} nm)`}>
-            <Irradiance mwCm2={wm2ToMwCm2(band.wm2)} />
+            {band.wm2 === null ? (
+              <span className="font-semibold text-ink-muted">not measured</span>
+            ) : (
+              <Irradiance mwCm2={wm2ToMwCm2(band.wm2)} />
+            )}
             {summary.bandShares[name] !== null ? (
               <span className="ml-2 font-sans text-xs text-ink-soft">{formatPercent(summary.bandShares[name]!)} of the total</span>
             ) : null}
-            {band.partial ? (
+            {band.wm2 === null ? (
+              <p className="mt-1 font-sans text-xs text-warn">
+                The file covers {formatLength(summary.rangeNm[0])}–{formatLength(summary.rangeNm[1])} nm and does not
+                reach this band at all: nothing of it was measured, which is not the same as no emission there.
+              </p>
+            ) : band.partial ? (
               <p className="mt-1 font-sans text-xs text-warn">
                 <span className="font-semibold">Partial band. </span>
                 {partialNote(band, summary.rangeNm)}
@@ -116,7 +124,7 @@ export function EmissionPeaksTable({ summary, fileName }: { summary: SpectrumSum
             <th scope="col" className="bl-label py-1.5 pr-4">Height</th>
             <th scope="col" className="bl-label py-1.5 pr-4">FWHM</th>
             <th scope="col" className="bl-label py-1.5 pr-4">Half-maximum points</th>
-            <th scope="col" className="bl-label py-1.5">Centroid</th>
+            <th scope="col" className="bl-label py-1.5">Centroid (whole line)</th>
           </tr>
         </thead>
         <tbody>
@@ -132,7 +140,18 @@ export function EmissionPeaksTable({ summary, fileName }: { summary: SpectrumSum
                   ? '—'
                   : `${formatLength(p.halfMaxLoNm)}–${formatLength(p.halfMaxHiNm)} nm`}
               </td>
-              <td className="py-1.5">{p.centroidNm === null ? '—' : `${formatLength(p.centroidNm)} nm`}</td>
+              <td className="py-1.5">
+                {p.centroidNm === null ? (
+                  '—'
+                ) : (
+                  <>
+                    {formatLength(p.centroidNm)} nm{' '}
+                    <span className="font-sans text-xs text-ink-muted">
+                      (over {formatLength(p.centroidFromNm)}–{formatLength(p.centroidToNm)} nm)
+                    </span>
+                  </>
+                )}
+              </td>
             </tr>
           ))}
         </tbody>
