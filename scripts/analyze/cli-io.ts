@@ -1,4 +1,4 @@
-/** What both bench CLI commands share: option parsing, reading a file, tidy numbers. */
+/** What the bench CLI commands share: option parsing, reading a file, hints on issues, tidy numbers. */
 import { readFile, stat } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
 import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
@@ -55,9 +55,4 @@ export async function readInputFile(file: string, whatItIsNot: string): Promise<
   }
 }
 
-/** Rounds away float noise (10 significant digits) so the JSON reads cleanly. */
-export function tidy(v: number): number;
-export function tidy(v: number | null): number | null;
-export function tidy(v: number | null): number | null {
-  return v === null || !Number.isFinite(v) ? null : Number(v.toPrecision(10));
-}
+export { tidy } from '#shared/measurement/check/grid-report.ts';

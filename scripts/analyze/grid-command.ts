@@ -8,14 +8,14 @@
  * Exit codes: 0 file usable (importer warnings go to stderr and into "issues"), 1 file not usable
  * (missing, unreadable, rejected by the importer, no readings), 2 bad command line.
  */
-import { parseCommandLine, readInputFile, tidy, withCliHint } from './cli-io.ts';
+import { parseCommandLine, readInputFile, withCliHint } from './cli-io.ts';
 import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
 import { checkMeterReadingsFile } from '#shared/measurement/check/check-meter-readings-file.ts';
 import type { GridAnalysis } from '#shared/measurement/check/analyze-grid.ts';
 import { parseFootprintCm } from '#shared/measurement/check/footprint-text.ts';
 import { STANDARD_LEVELS_PCT } from '#shared/measurement/plane/levels.ts';
 import type { FootprintCm } from '#shared/measurement/plane/uniformity.ts';
-import type { FootprintEdge } from '#shared/measurement/plane/footprint-area.ts';
+import { planeFigures, tidy, type PlaneFigures } from '#shared/measurement/check/grid-report.ts';
 
 export const GRID_USAGE =
   'usage: analyze.ts grid [--footprint WxH] FILE\n' +
@@ -24,33 +24,9 @@ export const GRID_USAGE =
   '               "footprintArea" over the whole area (interpolated, area-weighted), "footprint" of the readings inside\n' +
   'Prints one JSON document. Exit 0: file usable; 1: file not usable; 2: bad command line.\n';
 
-export interface GridPlaneReport {
+export interface GridPlaneReport extends PlaneFigures {
   distanceCm: number;
   points: number;
-  peakMwCm2: number | null;
-  centerMwCm2: number | null;
-  spreadWidthCm: Record<string, number>;
-  widthAtEdge: number[];
-  /** Uniformity of the readings inside the emitting area (each reading weighs the same). */
-  footprint: UniformityFigures | null;
-  /**
-   * Uniformity of the interpolated map over the emitting area, area-weighted: comparable across
-   * grids. Added beside `footprint`, whose meaning is unchanged.
-   */
-  footprintArea:
-    | (UniformityFigures & { coveredShare: number | null; edgesWithoutReading: FootprintEdge[]; issues: ImportIssue[] })
-    | null;
-}
-
-interface UniformityFigures {
-  minOverMean: number | null;
-  minOverMax: number | null;
-  cv: number | null;
-  nonUniformityPct: number | null;
-}
-
-function uniformityFigures(u: UniformityFigures): UniformityFigures {
-  return { minOverMean: tidy(u.minOverMean), minOverMax: tidy(u.minOverMax), cv: tidy(u.cv), nonUniformityPct: tidy(u.nonUniformityPct) };
 }
 
 export interface GridReport {
@@ -78,26 +54,13 @@ function parseOptions(args: string[]): ParsedArgs {
 
 /** The JSON report of a grid already analysed (pure: no I/O). Keys keep their meaning across versions. */
 export function buildGridReport(file: string, grid: GridAnalysis, issues: ImportIssue[] = []): GridReport {
-  const planes = grid.planes.map(({ distanceCm, analysis: a }): GridPlaneReport => {
-    const spreadWidthCm: Record<string, number> = {};
-    for (const w of a.spreadWidths) spreadWidthCm[String(w.pct)] = tidy(w.widthCm);
-    const area = a.footprintArea;
+  const planes = grid.planes.map((plane): GridPlaneReport => {
+    const figures = planeFigures(plane);
     return {
-      distanceCm: tidy(distanceCm),
-      points: a.points,
-      peakMwCm2: tidy(a.peak),
-      centerMwCm2: tidy(a.center),
-      spreadWidthCm,
-      widthAtEdge: a.widthAtEdge,
-      footprint: a.footprint ? uniformityFigures(a.footprint) : null,
-      footprintArea: area
-        ? {
-            ...uniformityFigures(area),
-            coveredShare: tidy(area.coveredShare),
-            edgesWithoutReading: area.edgesWithoutReading,
-            issues: area.issues.map(withCliHint),
-          }
-        : null,
+      distanceCm: tidy(plane.distanceCm),
+      points: plane.analysis.points,
+      ...figures,
+      footprintArea: figures.footprintArea ? { ...figures.footprintArea, issues: figures.footprintArea.issues.map(withCliHint) } : null,
     };
   });
   return { file, planes, falloffExponent: tidy(grid.falloff.exponent), issues };

@@ -174,13 +174,26 @@ export const flagSchema = z.object({
   value: z.number().nullable(),
 });
 
+const uniformitySchema = z.object({
+  minOverMean: z.number().nullable(),
+  minOverMax: z.number().nullable(),
+  cv: z.number().nullable(),
+  nonUniformityPct: z.number().nullable(),
+});
+
 const planeFiguresSchema = z.object({
   peakMwCm2: z.number().nullable(),
   centerMwCm2: z.number().nullable(),
   spreadWidthCm: z.record(z.string(), z.number()),
   widthAtEdge: z.array(z.number()),
-  footprint: z
-    .object({ minOverMean: z.number().nullable(), minOverMax: z.number().nullable(), cv: z.number().nullable(), nonUniformityPct: z.number().nullable() })
+  footprint: uniformitySchema.nullable(),
+  /** Area-weighted over the interpolated map (comparable across grids); `footprint` is readings-only. */
+  footprintArea: uniformitySchema
+    .extend({
+      coveredShare: z.number().nullable(),
+      edgesWithoutReading: z.array(z.string()),
+      issues: z.array(z.object({ line: z.number().nullable(), code: z.string(), severity: z.enum(['error', 'warning']), message: z.string() })),
+    })
     .nullable(),
 });
 
