@@ -2,7 +2,7 @@
  * npm run demo: the whole app with demo data on this machine. Starts the project's
  * PostgreSQL (unless DATABASE_URL is set), migrates, seeds the demo accounts, writes the demo
  * instrument exports to demo-data/, builds the client and
- * runs the server, which serves both the API and the pages. Ctrl-C stops the server;
+ * runs the web server (API and pages) with the worker beside it. Ctrl-C stops both;
  * `npm run db:stop` stops PostgreSQL.
  */
 import { spawn } from 'node:child_process';
@@ -29,16 +29,22 @@ async function main() {
   console.log('\nDemo accounts:');
   for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(7)} ${u.email}  /  ${u.password}`);
   console.log('');
-  const server = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'main.ts')], {
-    cwd: ROOT,
-    stdio: 'inherit',
-    // Request logs stay quiet in the demo unless LOG_LEVEL asks for them.
-    env: { ...process.env, SERVE_CLIENT: 'true', DATABASE_URL: databaseUrl, LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn' },
-  });
-  const forward = (signal: NodeJS.Signals) => server.kill(signal);
+  // Request logs stay quiet in the demo unless LOG_LEVEL asks for them.
+  const env = { ...process.env, SERVE_CLIENT: 'true', DATABASE_URL: databaseUrl, LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn' };
+  // The worker runs the queued jobs (file analysis); the web server serves the API and the pages.
+  const worker = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'worker.ts')], { cwd: ROOT, stdio: 'inherit', env });
+  const server = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'main.ts')], { cwd: ROOT, stdio: 'inherit', env });
+  const children = [worker, server];
+  const forward = (signal: NodeJS.Signals) => children.forEach((c) => c.kill(signal));
   process.on('SIGINT', forward);
   process.on('SIGTERM', forward);
-  server.on('exit', (code) => process.exit(code ?? 0));
+  // When either stops, stop the other and leave with its code.
+  for (const c of children) {
+    c.on('exit', (code) => {
+      for (const other of children) if (other !== c && other.exitCode === null) other.kill('SIGTERM');
+      process.exitCode = code ?? 0;
+    });
+  }
 }
 
 main().catch((err: unknown) => {

@@ -30,7 +30,7 @@ export function createRunsService(deps: Deps) {
     const counts = await readingsRepo.progress(db, run.id);
     const stored = await runAnalysesRepo.get(db, run.id);
     const analysing = stored === null ? counts.analysed > 0 : stored.fingerprint !== (await runFingerprint(db, run.id, run.bands));
-    return { ...counts, analysing };
+    return { ...counts, analysing, flags: stored?.flags.length ?? 0 };
   };
 
   const load = async (db: Db, id: string): Promise<RunRecord> => {

@@ -69,6 +69,8 @@ export const runProgressSchema = z.object({
   excluded: z.number().int(),
   /** The run's figures are being recomputed after a change. */
   analysing: z.boolean(),
+  /** Automatic flags in the latest figures. */
+  flags: z.number().int(),
 });
 export type RunProgress = z.infer<typeof runProgressSchema>;
 

@@ -19,7 +19,9 @@ export interface LabSection {
 
 export const LAB_SECTIONS: readonly LabSection[] = [
   { path: '', label: 'Overview', capability: 'lab.enter', action: 'use the staff area', inNav: true, load: () => import('./routes/lab/overview.tsx') },
-  { path: 'runs', label: 'Runs', capability: 'runs.create', action: 'create runs', inNav: true, load: () => import('./routes/lab/runs.tsx') },
+  { path: 'runs', label: 'Runs', capability: 'lab.enter', action: 'see runs', inNav: true, load: () => import('./routes/lab/runs.tsx') },
+  { path: 'runs/new', label: 'New run', capability: 'runs.create', action: 'create runs', inNav: false, load: () => import('./routes/lab/run-new.tsx') },
+  { path: 'runs/:runId', label: 'Run', capability: 'lab.enter', action: 'see runs', inNav: false, load: () => import('./routes/lab/run.tsx') },
   { path: 'check', label: 'File check', capability: 'runs.upload', action: 'check instrument files', inNav: true, load: () => import('./routes/lab/file-check.tsx') },
   { path: 'catalog', label: 'Catalog', capability: 'catalog.manage', action: 'manage the catalog', inNav: true, load: () => import('./routes/lab/catalog.tsx') },
   { path: 'review', label: 'Review', capability: 'runs.review', action: 'review runs', inNav: true, load: () => import('./routes/lab/review.tsx') },

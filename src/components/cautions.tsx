@@ -2,8 +2,9 @@ import { useId } from 'react';
 import { cn } from '../lib/cn.ts';
 
 /**
- * The cautions that go wherever irradiance, dose, session time or a plan is shown
- * (product brief, "Cautions"). Wording is ours; keep every point when editing.
+ * The cautions that go wherever irradiance, dose, session time or a plan is shown: eyes, the
+ * invisible near-infrared, heat, photosensitivity, measurements not advice, local rules first.
+ * Keep every point when editing.
  */
 export const CAUTIONS = [
   {

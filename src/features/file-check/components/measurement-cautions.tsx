@@ -1,6 +1,6 @@
 import { Cautions } from '#src/components/cautions.tsx';
 
-/** Goes beside every block of figures on this page (product brief, "Cautions"). */
+/** Goes beside every block of figures on this page: irradiance is never shown without the cautions. */
 export function MeasurementCautions() {
   return (
     <div className="space-y-3">

@@ -7,10 +7,10 @@ import type { MeterReadingsFileCheck } from '#shared/measurement/check/check-met
 import { formatBytes, formatLength } from '#src/lib/format.ts';
 import { CheckStatus, ReadingNote } from './check-status.tsx';
 import { FalloffSummary } from './falloff-summary.tsx';
-import { FileDropZone } from './file-drop-zone.tsx';
-import { IssueList } from './issue-list.tsx';
+import { FileDropZone } from '#src/components/file-drop-zone.tsx';
+import { IssueList } from '#src/components/issue-list.tsx';
 import { MeasurementCautions } from './measurement-cautions.tsx';
-import { PlanePicker } from './plane-picker.tsx';
+import { SegmentedChoice } from '#src/components/segmented-choice.tsx';
 import { PlaneReport } from './plane-report.tsx';
 
 function summarize(state: 'reading' | 'read' | 'failed' | null, check: MeterReadingsFileCheck | null): string {
@@ -106,7 +106,12 @@ export function MeterCheckSection() {
       {check && check.ok && index >= 0 ? (
         <div className="space-y-8">
           <MeasurementCautions />
-          <PlanePicker distancesCm={distances} value={distance!} onChange={setPicked} />
+          <SegmentedChoice
+            legend="Plane (distance from the emitting surface)"
+            options={distances.map((d) => ({ value: d, label: `${formatLength(d)} cm` }))}
+            value={distance!}
+            onChange={setPicked}
+          />
           <PlaneReport plane={check.planes[index]} footprint={footprint} />
           <FalloffSummary falloff={check.falloff} planes={check.planes.length} />
         </div>

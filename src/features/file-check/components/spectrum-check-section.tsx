@@ -3,7 +3,7 @@ import { SelectField } from '#src/components/select-field.tsx';
 import { useSpectrumChecks, type SpectrumFileItem } from '../hooks/use-spectrum-checks.ts';
 import { SPECTRAL_UNITS } from '../utils/page-checks.ts';
 import { prettyUnit } from '#src/lib/format.ts';
-import { FileDropZone } from './file-drop-zone.tsx';
+import { FileDropZone } from '#src/components/file-drop-zone.tsx';
 import { MeasurementCautions } from './measurement-cautions.tsx';
 import { SpectrumResultCard } from './spectrum-result-card.tsx';
 

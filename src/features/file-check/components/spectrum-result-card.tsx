@@ -3,7 +3,7 @@ import { Card } from '#src/components/card.tsx';
 import type { SpectrumFileItem } from '../hooks/use-spectrum-checks.ts';
 import { formatBytes } from '#src/lib/format.ts';
 import { CheckStatus, ReadingNote } from './check-status.tsx';
-import { IssueList } from './issue-list.tsx';
+import { IssueList } from '#src/components/issue-list.tsx';
 import { EmissionPeaksTable, SpectrumFigures, UnitLine } from './spectrum-figures.tsx';
 
 // The chart library is most of this page's code: it loads with the first readable spectrum.

@@ -1,5 +1,5 @@
 import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
-import { cn } from '#src/lib/cn.ts';
+import { cn } from '../lib/cn.ts';
 
 /** Errors first (they decide whether the file is usable), then warnings, each in file order. */
 function ordered(issues: readonly ImportIssue[]): ImportIssue[] {

@@ -1,5 +1,5 @@
 import { useId, useState, type DragEvent, type ReactNode } from 'react';
-import { cn } from '#src/lib/cn.ts';
+import { cn } from '../lib/cn.ts';
 
 /**
  * A native file input inside a box that also takes dropped files. Keyboard and screen-reader
