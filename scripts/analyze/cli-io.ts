@@ -1,4 +1,4 @@
-/** What the bench CLI commands share: option parsing, reading a file, hints on issues, tidy numbers. */
+/** What the bench CLI commands share: option parsing, reading a file, hints on issues, issue lines, tidy numbers. */
 import { readFile, stat } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
 import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
@@ -35,6 +35,11 @@ export function parseCommandLine<K extends string>(args: string[], optionNames: 
     // node's messages name the option, e.g. "Unknown option '--colour'".
     return { ok: false, message: err instanceof Error ? err.message.split('\n')[0] : String(err) };
   }
+}
+
+/** One importer issue as a stderr line: `file:line: severity code: message`. */
+export function formatIssue(file: string, i: ImportIssue): string {
+  return `${file}${i.line === null ? '' : `:${i.line}`}: ${i.severity} ${i.code}: ${i.message}\n`;
 }
 
 /** The file's bytes, or a sentence saying why they cannot be had. */

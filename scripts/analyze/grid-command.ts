@@ -8,7 +8,7 @@
  * Exit codes: 0 file usable (importer warnings go to stderr and into "issues"), 1 file not usable
  * (missing, unreadable, rejected by the importer, no readings), 2 bad command line.
  */
-import { parseCommandLine, readInputFile, withCliHint } from './cli-io.ts';
+import { formatIssue, parseCommandLine, readInputFile, withCliHint } from './cli-io.ts';
 import type { ImportIssue } from '#shared/measurement/import/import-issue.ts';
 import { checkMeterReadingsFile } from '#shared/measurement/check/check-meter-readings-file.ts';
 import type { GridAnalysis } from '#shared/measurement/check/analyze-grid.ts';
@@ -64,10 +64,6 @@ export function buildGridReport(file: string, grid: GridAnalysis, issues: Import
     };
   });
   return { file, planes, falloffExponent: tidy(grid.falloff.exponent), issues };
-}
-
-function formatIssue(file: string, i: ImportIssue): string {
-  return `${file}${i.line === null ? '' : `:${i.line}`}: ${i.severity} ${i.code}: ${i.message}\n`;
 }
 
 export async function runGridCommand(args: string[]): Promise<number> {
