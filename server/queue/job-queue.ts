@@ -34,7 +34,11 @@ export interface JobQueue {
    * Handle jobs of one queue. The handler gets one job's data; a throw fails that job, which is
    * retried with backoff. `batchSize` jobs are fetched at once.
    */
-  work(name: QueueName, options: { batchSize?: number; pollingIntervalSeconds?: number }, handler: (data: Record<string, string>) => Promise<void>): Promise<void>;
+  work(
+    name: QueueName,
+    options: { batchSize?: number; pollingIntervalSeconds?: number; concurrency?: number },
+    handler: (data: Record<string, string>) => Promise<unknown>,
+  ): Promise<void>;
   /** Jobs waiting or running in a queue (for progress and tests). */
   pending(name: QueueName): Promise<number>;
   stop(): Promise<void>;
@@ -80,15 +84,21 @@ export async function startJobQueue(options: JobQueueOptions): Promise<JobQueue>
         { batchSize: opts.batchSize ?? 1, pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 0.5 },
         async (jobs) => {
           // Each job succeeds or fails on its own: one bad file must not retry its whole batch.
+          // A few run at once, so one job's database round trips overlap another's parsing.
           const failed: string[] = [];
-          for (const job of jobs) {
-            try {
-              await handler(job.data);
-            } catch (err) {
-              options.logger.warn({ err: err instanceof Error ? err.message : String(err), queue: name, job: job.id }, 'job failed; it will be retried');
-              failed.push(job.id);
+          let next = 0;
+          const lane = async () => {
+            while (next < jobs.length) {
+              const job = jobs[next++];
+              try {
+                await handler(job.data);
+              } catch (err) {
+                options.logger.warn({ err: err instanceof Error ? err.message : String(err), queue: name, job: job.id }, 'job failed; it will be retried');
+                failed.push(job.id);
+              }
             }
-          }
+          };
+          await Promise.all(Array.from({ length: Math.max(1, Math.min(opts.concurrency ?? 1, jobs.length)) }, lane));
           const done = jobs.map((j) => j.id).filter((id) => !failed.includes(id));
           if (done.length > 0) await boss.complete(name, done);
           if (failed.length > 0) await boss.fail(name, failed);

@@ -26,6 +26,9 @@ import { runFingerprint } from './run-fingerprint.ts';
 import type { StoredReadingValues } from './readings-service.ts';
 
 const fmt = (v: number) => Number(v.toPrecision(3));
+
+/** How long a file may wait for its analysis before the run's figures stop waiting for it. */
+const PENDING_PATIENCE_MS = 10 * 60 * 1000;
 const where = (p: GridPoint) => `${fmt(p.distanceCm)} cm, x ${fmt(p.xCm)}, y ${fmt(p.yCm)}`;
 
 export function createRunProcessingService(deps: Pick<ServiceDeps, 'db' | 'clock' | 'queue' | 'storage' | 'logger'>) {
@@ -104,11 +107,19 @@ export function createRunProcessingService(deps: Pick<ServiceDeps, 'db' | 'clock
       });
     },
 
-    /** Recomputes a run's figures, per-reading values and flags, and stores them with their fingerprint. */
-    async analyzeRun(caller: Caller, runId: string): Promise<void> {
+    /**
+     * Recomputes a run's figures, per-reading values and flags, and stores them with their
+     * fingerprint. While files of the run still wait for their analysis it does nothing: the last
+     * file's job queues this again after its own analysis commits, so the figures are computed once
+     * per batch, not once per file. A file waiting longer than PENDING_PATIENCE_MS is taken as lost
+     * (its job gave up) and no longer holds the figures back.
+     */
+    async analyzeRun(caller: Caller, runId: string): Promise<'analysed' | 'waiting'> {
       assertCan(caller, 'runs.upload');
       const run = await runsRepo.findById(deps.db, runId);
-      if (!run) return;
+      if (!run) return 'analysed';
+      const since = new Date(deps.clock.now().getTime() - PENDING_PATIENCE_MS);
+      if ((await fileAnalysesRepo.pendingSince(deps.db, runId, since)) > 0) return 'waiting';
       const fingerprint = await runFingerprint(deps.db, runId, run.bands);
       const readings = await readingsRepo.listForRun(deps.db, runId);
       const analyses = await fileAnalysesRepo.currentForRun(deps.db, runId);
@@ -146,6 +157,7 @@ export function createRunProcessingService(deps: Pick<ServiceDeps, 'db' | 'clock
 
       flags.push(...outlierFlags(gridValues, expectedShape(run, gridValues)), ...driftFlags(run, readings, valueOf), ...runLevelFlags(run, readings));
       await runAnalysesRepo.upsert(deps.db, runId, { fingerprint, figures, flags, values }, deps.clock.now());
+      return 'analysed';
     },
 
     async analysis(caller: Caller, runId: string): Promise<RunAnalysis> {

@@ -1,6 +1,6 @@
 /**
  * Before the browser tests: a fresh database with the demo seed, the built client, and the
- * real server started on a free 127.0.0.1 port. Chromium must exist (npm test installs it):
+ * real server (on a free 127.0.0.1 port) and worker started. Chromium must exist (npm test installs it):
  * without it this fails rather than skipping.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
@@ -48,6 +48,7 @@ async function waitHealthy(url: string, child: ChildProcess, log: () => string) 
 }
 
 let server: ChildProcess | null = null;
+let worker: ChildProcess | null = null;
 
 export default async function setup(project: TestProject) {
   if (!fs.existsSync(CHROMIUM_PATH)) {
@@ -72,6 +73,14 @@ export default async function setup(project: TestProject) {
   });
   server.stdout?.on('data', (d) => (output += d));
   server.stderr?.on('data', (d) => (output += d));
+  // The worker analyses uploads, as in production.
+  worker = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'worker.ts')], {
+    cwd: ROOT,
+    env: { ...process.env, NODE_ENV: 'test', DATABASE_URL: databaseUrl, LOG_LEVEL: 'warn' },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  worker.stdout?.on('data', (d) => (output += d));
+  worker.stderr?.on('data', (d) => (output += d));
   const baseUrl = `http://127.0.0.1:${port}`;
   await waitHealthy(baseUrl, server, () => output);
 
@@ -79,9 +88,11 @@ export default async function setup(project: TestProject) {
   project.provide('chromiumPath', CHROMIUM_PATH);
 
   return async () => {
-    if (server && server.exitCode === null) {
-      server.kill('SIGTERM');
-      await new Promise((r) => server!.once('exit', r));
+    for (const child of [server, worker]) {
+      if (child && child.exitCode === null) {
+        child.kill('SIGTERM');
+        await new Promise((r) => child.once('exit', r));
+      }
     }
   };
 }

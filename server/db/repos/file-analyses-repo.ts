@@ -62,6 +62,18 @@ export const fileAnalysesRepo = {
     return new Map(rows.map((r) => [r.run_file_id as string, toAnalysis(r)]));
   },
 
+  /** Files of a run uploaded after `since` that have no analysis yet (their jobs are still to run). */
+  async pendingSince(db: Knex, runId: string, since: Date): Promise<number> {
+    const row = await db('run_files as f')
+      .leftJoin('file_analyses as fa', 'fa.run_file_id', 'f.id')
+      .where('f.run_id', runId)
+      .whereNull('fa.run_file_id')
+      .andWhere('f.uploaded_at', '>', since)
+      .count<{ count: number }[]>('* as count')
+      .first();
+    return Number(row?.count ?? 0);
+  },
+
   async countForRun(db: Knex, runId: string): Promise<number> {
     const row = await db('file_analyses').where({ run_id: runId }).count<{ count: number }[]>('* as count').first();
     return Number(row?.count ?? 0);
