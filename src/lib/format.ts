@@ -2,6 +2,8 @@
  * Every number, date and unit the pages print goes through here. Unit conversions come from
  * shared/measurement/units.ts (re-exported for the pages), so a figure is converted one way only.
  */
+import { minorToMajor } from './money.ts';
+
 export { wm2ToMwCm2 } from '#shared/measurement/units.ts';
 
 const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
@@ -10,6 +12,14 @@ const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'sh
 export function formatDate(iso: string): string {
   const d = new Date(iso);
   return Number.isNaN(d.getTime()) ? iso : dateFormat.format(d);
+}
+
+const dayFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+
+/** A calendar date (YYYY-MM-DD, no time): "3 Mar 2025" in every time zone. */
+export function formatDay(isoDate: string): string {
+  const d = new Date(`${isoDate}T00:00:00Z`);
+  return Number.isNaN(d.getTime()) ? isoDate : dayFormat.format(d);
 }
 
 /** "1 minute", "5 minutes": rounds up so nobody retries too early. */
@@ -67,4 +77,14 @@ export function formatBytes(bytes: number): string {
   if (bytes < 1024) return `${bytes} B`;
   if (bytes < 1024 * 1024) return `${formatFigure(bytes / 1024)} kB`;
   return `${formatFigure(bytes / (1024 * 1024))} MB`;
+}
+
+/** A price from integer minor units: "€129.99", "US$1,299.00". Formatted from the digits, not a float. */
+export function formatMoney(amountMinor: number, currency: string): string {
+  const major = minorToMajor(amountMinor, currency);
+  try {
+    return new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(major as Intl.StringNumericLiteral);
+  } catch {
+    return `${major} ${currency}`;
+  }
 }

@@ -12,6 +12,8 @@ export type StubHandler = StubAnswer | ((body: unknown) => StubAnswer) | 'networ
 export interface FetchCall {
   method: string;
   path: string;
+  /** The search params sent, e.g. { sort: 'name', dir: 'desc', page: '2' }. */
+  query: Record<string, string>;
   body: unknown;
   credentials: RequestCredentials | undefined;
 }
@@ -23,7 +25,7 @@ export function stubFetch(handlers: Record<string, StubHandler>) {
     const method = (init?.method ?? 'GET').toUpperCase();
     const body = typeof init?.body === 'string' ? JSON.parse(init.body) : undefined;
     const key = `${method} ${url.pathname}`;
-    calls.push({ method, path: url.pathname, body, credentials: init?.credentials });
+    calls.push({ method, path: url.pathname, query: Object.fromEntries(url.searchParams), body, credentials: init?.credentials });
     const handler = handlers[key];
     if (handler === 'network-error') throw new TypeError('Failed to fetch');
     if (!handler) {
