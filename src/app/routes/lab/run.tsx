@@ -1,5 +1,5 @@
-import type { QueryClient } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { useEffect, useState } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { can } from '#shared/auth/capabilities.ts';
 import { runIsEditable } from '#shared/lab/run-workflow.ts';
@@ -41,6 +41,15 @@ export default function RunRoute() {
   const audit = useAudit(runId, `${run.data?.status}-${run.data?.updatedAt}-${run.data?.progress.received}`);
   const [selectedId, setSelectedId] = useState<string | null>(null);
   const [picked, setPicked] = useState<number | null>(null);
+  const queryClient = useQueryClient();
+  const p = run.data?.progress;
+  const progressKey = p ? `${p.received}-${p.analysed}-${p.failed}-${p.excluded}-${p.analysing}-${run.data?.status}` : '';
+  // Whenever the run's progress moves, the readings and figures follow (one last fetch after polling stops too).
+  useEffect(() => {
+    if (!progressKey) return;
+    void queryClient.invalidateQueries({ queryKey: ['lab', 'runs', runId, 'readings'] });
+    void queryClient.invalidateQueries({ queryKey: ['lab', 'runs', runId, 'analysis'] });
+  }, [progressKey, queryClient, runId]);
 
   if (run.isPending) return <Spinner label="Loading the run…" />;
   if (run.isError) return <ErrorState error={run.error} onRetry={() => void run.refetch()} />;
