@@ -10,6 +10,7 @@ import type { ModelCategory } from '#shared/schemas/models.ts';
 import type { SessionUser } from '#shared/schemas/users.ts';
 import { DEMO_INSTRUMENTS, DEMO_METER_ID, DEMO_RUN_INSTRUMENT, DEMO_UNITS, type DemoUnit } from './demo/catalog.ts';
 import { buildDemoScenario, demoGrid } from './demo/scenario.ts';
+import { seedDemoReports } from './demo-reports.ts';
 
 const CATEGORY: Record<DemoUnit['kind'], ModelCategory> = {
   'body panel': 'panel',
@@ -21,9 +22,6 @@ const CATEGORY: Record<DemoUnit['kind'], ModelCategory> = {
 /** Fictional shop prices and power draws, in the lab's currency. */
 const PRICE_EUR_CENTS: Record<string, number> = { 'corvane-fenwick': 89900, 'aldermoor-tarn': 24900, 'quenby-mere': 41900, 'norrow-holt': 54900 };
 const POWER_W: Record<string, number> = { 'corvane-fenwick': 300, 'aldermoor-tarn': 60, 'quenby-mere': 90, 'norrow-holt': 150 };
-
-/** Where each demo run stops in review (the first is approved, the last stays a draft). */
-const STATES = ['approved', 'submitted', 'changes_requested', 'draft'] as const;
 
 function addYears(day: string, years: number): string {
   return `${Number(day.slice(0, 4)) + years}${day.slice(4)}`;
@@ -64,6 +62,7 @@ export async function seedDemoLab(services: Services, people: DemoPeople): Promi
   }
 
   const makers = (await services.makers.list(seed, all)).items;
+  const approved = new Map<string, string>();
   for (const [index, demo] of DEMO_UNITS.entries()) {
     const maker = makers.find((m) => m.name === demo.maker) ?? (await services.makers.create(seed, { name: demo.maker, notes: 'Demo maker (fictional).' }));
     makers.push(maker);
@@ -96,37 +95,42 @@ export async function seedDemoLab(services: Services, people: DemoPeople): Promi
     const runs = (await services.runs.list(seed, { q: '', sort: 'createdAt', dir: 'asc', page: 1, pageSize: 50, unitId: unit.id })).items;
     if (runs.length > 0) continue;
     const demoRun = manifest.runs.find((r) => r.unitId === demo.id)!;
-    const run = await services.runs.create(seed, {
-      unitId: unit.id,
-      instrumentId: instrumentIds.get(DEMO_RUN_INSTRUMENT[demo.id])!,
-      grid: demoGrid(demo),
-      centerChecks: false,
-      measuredById: people.tester.id,
-      measuredOn: demoRun.measuredOn,
-      conditions: { roomTempC: 22.5, warmupMinutes: 10, mainsVoltageV: 230 },
-      notes: 'Demo run: files generated from the LED-array model with instrument noise.',
-    });
-    const uploads = demoRun.files.map((f) => ({ originalName: f.path.split('/').pop()!, bytes: new TextEncoder().encode(text.get(f.path)!) }));
-    await services.runUploads.upload(tester, run.id, uploads, null);
-    await analyseNow(services, run.id);
-    await moveTo(services, run.id, STATES[index % STATES.length], tester, editor);
-
-    if (index === 0) {
-      // The body panel was also measured with the thermopile meter: a meter run left as a draft.
-      const meterRun = await services.runs.create(seed, {
+    const spectra = demoRun.files.map((f) => ({ originalName: f.path.split('/').pop()!, bytes: new TextEncoder().encode(text.get(f.path)!) }));
+    const newRun = (instrumentKey: string, notes: string) =>
+      services.runs.create(seed, {
         unitId: unit.id,
-        instrumentId: instrumentIds.get(DEMO_METER_ID)!,
+        instrumentId: instrumentIds.get(instrumentKey)!,
         grid: demoGrid(demo),
         centerChecks: false,
         measuredById: people.tester.id,
         measuredOn: demoRun.measuredOn,
-        notes: 'Demo meter run: the lab template, one row per grid point.',
+        conditions: { roomTempC: 22.5, warmupMinutes: 10, mainsVoltageV: 230 },
+        notes,
       });
+    // The unit's reference run, approved: the reports are made of these.
+    const run = await newRun(DEMO_RUN_INSTRUMENT[demo.id], 'Demo run: files generated from the LED-array model with instrument noise.');
+    await services.runUploads.upload(tester, run.id, spectra, null);
+    await analyseNow(services, run.id);
+    await moveTo(services, run.id, 'approved', tester, editor);
+    approved.set(demo.id, run.id);
+
+    // Re-measurements in the other states of review, so the lab's queues are not empty.
+    const again = REMEASURED[demo.id];
+    if (again) {
+      const second = await newRun(DEMO_RUN_INSTRUMENT[demo.id], 'Demo re-measurement after a firmware update (same files, for the demo).');
+      await services.runUploads.upload(tester, second.id, spectra, null);
+      await analyseNow(services, second.id);
+      await moveTo(services, second.id, again, tester, editor);
+    }
+    if (demo.id === 'corvane-fenwick') {
+      // The body panel was also measured with the thermopile meter: a meter run left as a draft.
+      const meterRun = await newRun(DEMO_METER_ID, 'Demo meter run: the lab template, one row per grid point.');
       const meterPath = demoRun.meterReadings.path;
       await services.runUploads.upload(tester, meterRun.id, [{ originalName: meterPath.split('/').pop()!, bytes: new TextEncoder().encode(text.get(meterPath)!) }], null);
       await analyseNow(services, meterRun.id);
     }
   }
+  await seedDemoReports(services, approved, editor);
 }
 
 /** The seed does the worker's job itself, so the demo opens on analysed runs (the queued jobs find them done). */
@@ -144,7 +148,14 @@ async function analyseNow(services: Services, runId: string): Promise<void> {
   await services.runProcessing.analyzeRun(worker, runId);
 }
 
-async function moveTo(services: Services, runId: string, state: (typeof STATES)[number], tester: Caller, editor: Caller): Promise<void> {
+/** Second runs of some units, and where each stops in review. */
+const REMEASURED: Record<string, 'submitted' | 'changes_requested' | 'draft'> = {
+  'aldermoor-tarn': 'submitted',
+  'norrow-holt': 'changes_requested',
+  'quenby-mere': 'draft',
+};
+
+async function moveTo(services: Services, runId: string, state: 'approved' | 'submitted' | 'changes_requested' | 'draft', tester: Caller, editor: Caller): Promise<void> {
   if (state === 'draft') return;
   await services.runs.transition(tester, runId, 'submit', undefined);
   if (state === 'submitted') return;

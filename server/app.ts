@@ -23,6 +23,11 @@ import { authRoutes } from './routes/auth-routes.ts';
 import { usersRoutes } from './routes/users-routes.ts';
 import { catalogRoutes } from './routes/catalog-routes.ts';
 import { runsRoutes } from './routes/runs-routes.ts';
+import { reportsRoutes } from './routes/reports-routes.ts';
+import { publicRoutes } from './routes/public-routes.ts';
+import { siteRoutes } from './routes/site-routes.ts';
+import { withPageMeta } from './http/index-html.ts';
+import { publicBaseUrl } from './http/public-url.ts';
 
 export interface AppDeps {
   config: Config;
@@ -89,8 +94,11 @@ export function createApp(deps: AppDeps): Express {
   api.use(usersRoutes(services.users));
   api.use(catalogRoutes(services));
   api.use(runsRoutes(services));
+  api.use(reportsRoutes(services));
+  api.use(publicRoutes(services, { publicBaseUrl: config.PUBLIC_BASE_URL }));
   api.use(apiNotFound);
   app.use('/api', api);
+  app.use(siteRoutes(services, { publicBaseUrl: config.PUBLIC_BASE_URL }));
 
   if (config.serveClient) {
     const clientDir = deps.clientDir ?? path.resolve(import.meta.dirname, '..', 'dist');
@@ -99,10 +107,23 @@ export function createApp(deps: AppDeps): Express {
       logger.warn({ clientDir }, 'client not built: run "npm run build" to serve the web pages');
     }
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    let indexText: string | null = null;
+    const reportPath = /^\/reports\/([a-z0-9-]{1,100})(?:\/versions\/\d+)?\/?$/;
     // Every other path is a client route: the app decides what to show (incl. "page not found").
-    app.get('/{*splat}', (_req, res) => {
+    // A report's page gets its own title and link-preview metadata in the HTML itself.
+    app.get('/{*splat}', async (req, res, next) => {
       res.setHeader('Cache-Control', 'no-cache');
-      res.sendFile(indexHtml);
+      const match = reportPath.exec(req.path);
+      if (!match) return res.sendFile(indexHtml);
+      try {
+        const preview = await services.publicReports.linkPreview(match[1]);
+        if (!preview) return res.sendFile(indexHtml);
+        indexText ??= fs.readFileSync(indexHtml, 'utf8');
+        const url = `${publicBaseUrl(req, config.PUBLIC_BASE_URL)}${req.path}`;
+        res.type('html').send(withPageMeta(indexText, { title: preview.title, description: preview.summary, url }));
+      } catch (err) {
+        next(err);
+      }
     });
   }
 

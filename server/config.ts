@@ -29,6 +29,8 @@ export const configSchema = z.object({
   /** SMTP server for outgoing e-mail; without it, mail is written to the log. */
   SMTP_URL: z.string().url().optional(),
   MAIL_FROM: z.string().default('Benchlight <no-reply@benchlight.invalid>'),
+  /** The site's public address (https://…), for citations, the feed, the sitemap and e-mail links; else taken from each request. */
+  PUBLIC_BASE_URL: z.string().url().optional(),
 });
 
 export type Config = z.infer<typeof configSchema> & { serveClient: boolean };

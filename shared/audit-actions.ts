@@ -27,5 +27,11 @@ export const AUDIT_ACTIONS = [
   'run.comment',
   'reading.exclude',
   'reading.include',
+  'run.publish',
+  'report.create',
+  'report.update',
+  'report.publish',
+  'report.correct',
+  'report.retract',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

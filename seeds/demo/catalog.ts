@@ -132,6 +132,24 @@ export const DEMO_UNITS: readonly DemoUnit[] = [
     claimedBeamAngle: { angleDeg: 60, statesHalfAngle: false, wording: '60° lenses' },
     claimedIrradiance: { mwCm2: 120, distanceCm: 15, wording: 'Up to 120 mW/cm² at 15 cm' },
   },
+  {
+    // A second unit of the body panel, from a later batch: the report on the model shows the spread.
+    id: 'corvane-fenwick-b',
+    kind: 'body panel',
+    maker: 'Corvane Photonics',
+    model: 'Fenwick torso panel',
+    serial: 'CVP-2024-00452',
+    widthCm: 80,
+    heightCm: 34,
+    ledPitchCm: 2.8,
+    ledLayout: 'interleaved',
+    modelFullAngleDeg: 60,
+    ledBinSpread: 0.06,
+    centerAt15CmMwCm2: 78.5,
+    emitters: [red(630, 17, 0.2), red(660, 19, 0.3), nir(810, 32, 0.1), nir(830, 36, 0.15), nir(850, 38, 0.25)],
+    claimedBeamAngle: { angleDeg: 30, statesHalfAngle: false, wording: 'Beam angle 30°' },
+    claimedIrradiance: { mwCm2: 150, distanceCm: 0, wording: '> 150 mW/cm² at the surface' },
+  },
 ];
 
 /** Which spectroradiometer measured which unit; the meter measured every unit. */
@@ -140,6 +158,7 @@ export const DEMO_RUN_INSTRUMENT: Readonly<Record<string, string>> = {
   'aldermoor-tarn': 'hexmoor-fieldfare',
   'quenby-mere': 'pellow-linnet',
   'norrow-holt': 'orrin-siskin',
+  'corvane-fenwick-b': 'tallis-wren',
 };
 
 export const DEMO_METER_ID = 'tallis-stonechat';

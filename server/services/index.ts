@@ -9,6 +9,8 @@ import { createRunsService } from './runs-service.ts';
 import { createReadingsService } from './readings-service.ts';
 import { createRunUploadsService } from './run-uploads-service.ts';
 import { createRunProcessingService } from './run-processing-service.ts';
+import { createReportsService } from './reports-service.ts';
+import { createPublicReportsService } from './public-reports-service.ts';
 
 /** Every service, built once from the same collaborators (the web app, scripts and tests share this). */
 export function createServices(deps: ServiceDeps) {
@@ -23,6 +25,8 @@ export function createServices(deps: ServiceDeps) {
     readings: createReadingsService(deps),
     runUploads: createRunUploadsService(deps),
     runProcessing: createRunProcessingService(deps),
+    reports: createReportsService(deps),
+    publicReports: createPublicReportsService(deps),
   };
 }
 export type Services = ReturnType<typeof createServices>;

@@ -31,6 +31,8 @@ export const RUN_TRANSITIONS = {
   submit: { from: ['draft', 'changes_requested'], to: 'submitted', capability: 'runs.upload', noteRequired: false, notByMeasurer: false },
   request_changes: { from: ['submitted'], to: 'changes_requested', capability: 'runs.review', noteRequired: true, notByMeasurer: false },
   approve: { from: ['submitted'], to: 'approved', capability: 'runs.review', noteRequired: false, notByMeasurer: true },
+  /** Taken by the reports service when a report over the run is first published. */
+  publish: { from: ['approved'], to: 'published', capability: 'reports.publish', noteRequired: false, notByMeasurer: false },
 } as const satisfies Record<string, RunTransition>;
 export type RunTransitionName = keyof typeof RUN_TRANSITIONS;
 

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { can, type Capability, type Role } from '#shared/auth/capabilities.ts';
 import { catalogRoutes } from '#server/routes/catalog-routes.ts';
 import { runsRoutes } from '#server/routes/runs-routes.ts';
+import { reportsRoutes } from '#server/routes/reports-routes.ts';
 import { insertUser, makeTestApp, signedInAgent } from './helpers/test-app.ts';
 
 /** Every /api/lab route and the capability it needs. The test below proves the list is complete. */
@@ -40,13 +41,21 @@ const MATRIX: [method: 'get' | 'post' | 'patch', path: string, capability: Capab
   ['get', '/lab/runs/:id/audit', 'lab.enter'],
   ['get', '/lab/runs/:id/comments', 'lab.enter'],
   ['post', '/lab/runs/:id/comments', 'runs.upload'],
+  ['get', '/lab/reports', 'lab.enter'],
+  ['post', '/lab/reports', 'reports.publish'],
+  ['get', '/lab/reports/:id', 'lab.enter'],
+  ['patch', '/lab/reports/:id', 'reports.publish'],
+  ['get', '/lab/reports/:id/preview', 'reports.publish'],
+  ['post', '/lab/reports/:id/publish', 'reports.publish'],
+  ['post', '/lab/reports/:id/corrections', 'reports.publish'],
+  ['post', '/lab/reports/:id/retract', 'reports.publish'],
 ];
 
 /** The routes the lab routers really register (method + path), read from Express's own table. */
 function registeredRoutes(): string[] {
   const unused = new Proxy({}, { get: () => ({}) }) as never;
   const out: string[] = [];
-  for (const router of [catalogRoutes(unused), runsRoutes(unused)]) {
+  for (const router of [catalogRoutes(unused), runsRoutes(unused), reportsRoutes(unused)]) {
     for (const layer of (router as unknown as { stack: { route?: { path: string; methods: Record<string, boolean> } }[] }).stack) {
       if (!layer.route) continue;
       for (const m of Object.keys(layer.route.methods)) out.push(`${m} ${layer.route.path}`);

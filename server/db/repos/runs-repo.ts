@@ -24,6 +24,7 @@ export interface RunRecord {
   calibrationDueOn: string;
   calibrationUncertaintyPct: number;
   instrumentRangeNm: { from: number; to: number } | null;
+  instrumentCosineCorrector: string | null;
   grid: { distancesCm: number[]; xCm: number[]; yCm: number[] };
   bands: Record<string, { loNm: number; hiNm: number }>;
   centerChecks: boolean;
@@ -72,6 +73,7 @@ function base(db: Knex) {
       'i.calibration_uncertainty_pct',
       'i.range_from_nm',
       'i.range_to_nm',
+      'i.cosine_corrector',
       'mb.display_name as measured_by_name',
     );
 }
@@ -97,6 +99,7 @@ function toRecord(r: any): RunRecord {
     calibrationDueOn: isoDay(r.calibration_due_on)!,
     calibrationUncertaintyPct: Number(r.calibration_uncertainty_pct),
     instrumentRangeNm: r.range_from_nm === null ? null : { from: Number(r.range_from_nm), to: Number(r.range_to_nm) },
+    instrumentCosineCorrector: r.cosine_corrector,
     grid: r.grid,
     bands: r.bands,
     centerChecks: r.center_checks,

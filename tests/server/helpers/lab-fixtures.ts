@@ -62,3 +62,32 @@ export async function waitForAnalysis(agent: Agent, runId: string, expectAnalyse
   }
   throw new Error(`run ${runId} not analysed within ${timeoutMs} ms; last progress ${JSON.stringify(last)}`);
 }
+
+/**
+ * An approved run on a small part of the demo body panel's grid (15 and 30 cm, 3 × 3 points),
+ * made through the API: catalogue, run, upload, analysis (needs the app's worker), submission by
+ * the tester and approval by the editor.
+ */
+export async function approvedRun(
+  t: { origin: string },
+  tester: Agent,
+  editor: Agent,
+  options: { catalog?: Awaited<ReturnType<typeof makeCatalog>>; suffix?: string } = {},
+) {
+  const catalog = options.catalog ?? (await makeCatalog(tester, t.origin, 0, options.suffix ?? ''));
+  const grid = { distancesCm: [15, 30], xCm: [-20, 0, 20], yCm: [-30, 0, 30] };
+  const created = await tester.post('/api/lab/runs').set('Origin', t.origin).send({ unitId: catalog.unit.id, instrumentId: catalog.instrument.id, grid });
+  if (created.status !== 201) throw new Error(`run: ${created.status} ${JSON.stringify(created.body)}`);
+  const runId: string = created.body.run.id;
+  const wanted = new Set(grid.distancesCm.flatMap((d) => grid.yCm.flatMap((y) => grid.xCm.map((x) => `d${d}_x${x}_y${y}`))));
+  const req = tester.post(`/api/lab/runs/${runId}/files`).set('Origin', t.origin);
+  for (const f of demoRunFiles(0).filter((f) => wanted.has(f.name.replace(/\.[a-z]+$/, '')))) req.attach('files', f.bytes, f.name);
+  const up = await req;
+  if (up.status !== 202 || up.body.accepted.length !== 18) throw new Error(`upload: ${up.status} ${JSON.stringify(up.body)}`);
+  await waitForAnalysis(tester, runId, 18);
+  const submitted = await tester.post(`/api/lab/runs/${runId}/submit`).set('Origin', t.origin).send({});
+  if (submitted.status !== 200) throw new Error(`submit: ${submitted.status} ${JSON.stringify(submitted.body)}`);
+  const approved = await editor.post(`/api/lab/runs/${runId}/approve`).set('Origin', t.origin).send({});
+  if (approved.status !== 200) throw new Error(`approve: ${approved.status} ${JSON.stringify(approved.body)}`);
+  return { runId, catalog };
+}
