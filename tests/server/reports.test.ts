@@ -1,4 +1,11 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import pino from 'pino';
+import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createApp } from '#server/app.ts';
+import { loadConfig } from '#server/config.ts';
 import { publicReportSchema } from '#shared/schemas/reports.ts';
 import { insertUser, makeTestApp, signedInAgent } from './helpers/test-app.ts';
 import { approvedRun, makeCatalog } from './helpers/lab-fixtures.ts';
@@ -49,6 +56,7 @@ describe('reports: publication, versions, retraction, and what the public may se
       expect((await t.api().get(path)).status, path).toBe(404);
     }
     expect((await t.api().get('/api/public/reports')).body.reports).toEqual([]);
+    expect(await t.services.publicReports.linkPreview(slug)).toBeNull();
     expect((await t.api().get('/feed.xml')).text).not.toContain(slug);
     expect((await t.api().get('/sitemap.xml')).text).not.toContain(slug);
     // An approved run is not public either: only reports are.
@@ -106,6 +114,37 @@ describe('reports: publication, versions, retraction, and what the public may se
     expect(feed).toContain('Corrected (version 2)');
   });
 
+  it('puts the report\'s own title, description and social-card tags into index.html for its page', async () => {
+    const { slug, title } = (await t.api().get('/api/public/reports')).body.reports[0];
+    const clientDir = mkdtempSync(join(tmpdir(), 'benchlight-client-'));
+    writeFileSync(join(clientDir, 'index.html'), '<!doctype html><html><head><meta name="description" content="The site." /><title>Benchlight</title></head><body><div id="root"></div></body></html>');
+    const app = createApp({
+      config: loadConfig({ NODE_ENV: 'test', LOG_LEVEL: 'silent', SERVE_CLIENT: 'true', PUBLIC_BASE_URL: 'https://bench.example' }),
+      db: t.db,
+      mailer: { send: async () => {} },
+      clock: { now: () => new Date() },
+      queue: t.queue,
+      logger: pino({ level: 'silent' }),
+      clientDir,
+    });
+    const page = await request(app).get(`/reports/${slug}`);
+    expect(page.status).toBe(200);
+    expect(page.text).toContain(`<title>${title} · Benchlight</title>`);
+    expect(page.text).toContain(`<meta property="og:title" content="${title}" />`);
+    expect(page.text).toContain('<meta property="og:description" content="Two units of the test panel, measured at 15 and 30 cm only." />');
+    expect(page.text).toContain(`<meta property="og:url" content="https://bench.example/reports/${slug}" />`);
+    expect(page.text).toContain('<meta name="twitter:card" content="summary" />');
+    // The site-wide description is replaced, not repeated.
+    expect(page.text.match(/name="description"/g)).toHaveLength(1);
+    const v1 = await request(app).get(`/reports/${slug}/versions/1`);
+    expect(v1.text).toContain(`content="https://bench.example/reports/${slug}/versions/1"`);
+    // A slug with no published report gets the plain page (the public service answers drafts as unknown).
+    const hidden = await request(app).get('/reports/no-such-report');
+    expect(hidden.status).toBe(200);
+    expect(hidden.text).toContain('<title>Benchlight</title>');
+    expect(hidden.text).not.toContain('og:title');
+  });
+
   it('serves the readings as CSV with units in the column names, the figures as JSON, and the sitemap', async () => {
     const { slug } = (await t.api().get('/api/public/reports')).body.reports[0];
     const csv = await t.api().get(`/api/public/reports/${slug}/readings.csv`);
@@ -123,7 +162,7 @@ describe('reports: publication, versions, retraction, and what the public may se
   });
 
   it('retracts with a reason: the page stays with the reason, the index drops it, the audit keeps every step', async () => {
-    const { id, slug } = (await editor.get('/api/lab/reports')).body.reports[0];
+    const { id, slug } = (await editor.get('/api/lab/reports')).body.reports.find((r: { status: string }) => r.status === 'published');
     expect((await post(`/api/lab/reports/${id}/retract`, { reason: 'short' })).status).toBe(422);
     const res = await post(`/api/lab/reports/${id}/retract`, { reason: 'The bench fixture tilted the panel by several degrees.' });
     expect(res.body.report.status).toBe('retracted');
