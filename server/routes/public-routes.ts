@@ -6,6 +6,7 @@ import { publicBaseUrl } from '../http/public-url.ts';
 import { parseWith } from '../http/validate.ts';
 import { renderDocument } from '../reports/render-markdown.ts';
 import type { Services } from '../services/index.ts';
+import type { Rendered } from '../services/rendered-cache.ts';
 
 const slugParams = z.object({ slug: z.string().regex(/^[a-z0-9-]{1,100}$/) });
 const versionParams = slugParams.extend({ n: z.coerce.number().int().min(1).max(10000) });
@@ -13,6 +14,12 @@ const versionParams = slugParams.extend({ n: z.coerce.number().int().min(1).max(
 /** Short-lived public caching; Express adds an ETag and answers 304 to a matching If-None-Match. */
 function cacheable(res: Response, seconds = 60): void {
   res.setHeader('Cache-Control', `public, max-age=${seconds}`);
+}
+
+/** JSON serialised ahead; Express answers 304 itself when If-None-Match matches the ETag set here. */
+function sendRendered(res: Response, r: Rendered): void {
+  res.setHeader('ETag', r.etag);
+  res.type('application/json').send(r.body);
 }
 
 /** /api/public/…: read-only, published data only, cacheable. */
@@ -23,18 +30,18 @@ export function publicRoutes(s: Pick<Services, 'publicReports'>, opts: { publicB
 
   router.get('/public/reports', async (_req, res) => {
     cacheable(res);
-    res.json({ reports: await s.publicReports.list() });
+    sendRendered(res, await s.publicReports.listRendered());
   });
   router.get('/public/reports/:slug', async (req, res) => {
     const { slug } = parseWith(slugParams, req.params, 'params');
     cacheable(res);
-    res.json({ report: await s.publicReports.get(slug, null, publicBaseUrl(req, opts.publicBaseUrl)) });
+    sendRendered(res, await s.publicReports.getRendered(slug, null, publicBaseUrl(req, opts.publicBaseUrl)));
   });
   router.get('/public/reports/:slug/versions/:n', async (req, res) => {
     const { slug, n } = parseWith(versionParams, req.params, 'params');
-    // A version never changes once published: it may be cached for long.
-    cacheable(res, 3600);
-    res.json({ report: await s.publicReports.get(slug, n, publicBaseUrl(req, opts.publicBaseUrl)) });
+    // A version's figures never change once published, but its page shows a later retraction: keep it short too.
+    cacheable(res);
+    sendRendered(res, await s.publicReports.getRendered(slug, n, publicBaseUrl(req, opts.publicBaseUrl)));
   });
   router.get('/public/reports/:slug/readings.csv', async (req, res) => {
     const { slug } = parseWith(slugParams, req.params, 'params');

@@ -14,6 +14,7 @@ import { createPublicReportsService } from './public-reports-service.ts';
 
 /** Every service, built once from the same collaborators (the web app, scripts and tests share this). */
 export function createServices(deps: ServiceDeps) {
+  const publicReports = createPublicReportsService(deps);
   return {
     auth: createAuthService(deps),
     users: createUsersService(deps),
@@ -25,8 +26,8 @@ export function createServices(deps: ServiceDeps) {
     readings: createReadingsService(deps),
     runUploads: createRunUploadsService(deps),
     runProcessing: createRunProcessingService(deps),
-    reports: createReportsService(deps),
-    publicReports: createPublicReportsService(deps),
+    reports: createReportsService(deps, { afterPublicChange: () => publicReports.forget() }),
+    publicReports,
   };
 }
 export type Services = ReturnType<typeof createServices>;

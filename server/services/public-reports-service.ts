@@ -9,6 +9,7 @@ import type { PublicReport, PublicReportSummary } from '#shared/schemas/reports.
 import { notFound } from '../core/app-error.ts';
 import type { ServiceDeps } from '../core/context.ts';
 import { reportsRepo } from '../db/repos/reports-repo.ts';
+import { createRenderedCache, type Rendered } from './rendered-cache.ts';
 import { publicView } from './report-view.ts';
 
 const csvCell = (v: string | number | null) => (v === null ? '' : typeof v === 'number' ? String(Number(v.toPrecision(10))) : `"${v.replace(/"/g, '""')}"`);
@@ -23,6 +24,8 @@ function thumbnail(s: ReportSnapshot): PublicReportSummary['thumbnail'] {
   return { distanceCm: nearest, points, emittingAreaCm: s.model.emittingAreaCm };
 }
 
+const RECHECK_MS = 1000;
+
 export function createPublicReportsService(deps: Pick<ServiceDeps, 'db'>) {
   const load = async (slug: string) => {
     const report = await reportsRepo.findBySlug(deps.db, slug);
@@ -30,8 +33,25 @@ export function createPublicReportsService(deps: Pick<ServiceDeps, 'db'>) {
     if (!report || report.status === 'draft' || report.currentVersion < 1) throw notFound('That report');
     return report;
   };
+  const rendered = createRenderedCache();
+  // The report row behind a cached answer is re-read at most once a second per slug: under load
+  // that spares the database nearly every query; this process's own writes call forget().
+  const recent = new Map<string, { report: Awaited<ReturnType<typeof load>>; at: number }>();
+  const loadRecent = async (slug: string) => {
+    const hit = recent.get(slug);
+    if (hit && Date.now() - hit.at < RECHECK_MS) return hit.report;
+    const report = await load(slug);
+    if (recent.size > 1000) recent.clear();
+    recent.set(slug, { report, at: Date.now() });
+    return report;
+  };
 
-  return {
+  const service = {
+    /** Drops what is remembered of report rows, after a change made through this process. */
+    forget(): void {
+      recent.clear();
+    },
+
     async list(): Promise<PublicReportSummary[]> {
       const rows = await reportsRepo.currentVersions(deps.db, ['published']);
       return rows.map(({ report, version, firstPublishedAt }) => {
@@ -60,6 +80,19 @@ export function createPublicReportsService(deps: Pick<ServiceDeps, 'db'>) {
       if (!version) throw notFound('That version of the report');
       const versions = await reportsRepo.versionList(deps.db, report.id);
       return publicView(report, version, versions, versions[0]?.publishedAt ?? version.publishedAt, baseUrl);
+    },
+
+    /** The index as JSON, serialised once per state of the public reports. */
+    async listRendered(): Promise<Rendered> {
+      const stamp = await reportsRepo.publicStamp(deps.db);
+      return rendered.get(`list:${stamp}`, async () => ({ reports: await service.list() }));
+    },
+
+    /** One report (or one version of it) as JSON, serialised once per state of that report. */
+    async getRendered(slug: string, versionNumber: number | null, baseUrl: string): Promise<Rendered> {
+      const report = await loadRecent(slug);
+      const key = ['report', report.id, versionNumber ?? 'latest', report.status, report.currentVersion, report.updatedAt, baseUrl].join(':');
+      return rendered.get(key, async () => ({ report: await service.get(slug, versionNumber, baseUrl) }));
     },
 
     /** One row per reading, units in the column names. A report over several units adds unit_serial. */
@@ -93,5 +126,6 @@ export function createPublicReportsService(deps: Pick<ServiceDeps, 'db'>) {
       return version ? { title: version.title, summary: version.summary } : null;
     },
   };
+  return service;
 }
 export type PublicReportsService = ReturnType<typeof createPublicReportsService>;

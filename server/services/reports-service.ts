@@ -31,6 +31,8 @@ export function slugOf(...parts: string[]): string {
 export interface ReportHooks {
   /** Runs inside the publication's transaction (new-report e-mails are queued there, or not at all). */
   onPublished?: (trx: Db, reportId: string, version: number, kind: 'publish' | 'correct') => Promise<void>;
+  /** After a publication, correction or retraction has committed (the public side forgets what it remembered). */
+  afterPublicChange?: () => void;
 }
 
 export function createReportsService(deps: Pick<ServiceDeps, 'db' | 'clock' | 'queue'>, hooks: ReportHooks = {}) {
@@ -159,6 +161,7 @@ export function createReportsService(deps: Pick<ServiceDeps, 'db' | 'clock' | 'q
         await audit({ trx, clock: deps.clock, caller, action: 'report.publish', entity: { type: 'report', id }, before: { status: 'draft' }, after: { status: 'published', version: 1, slug: report.slug } });
         await hooks.onPublished?.(trx, id, 1, 'publish');
       });
+      hooks.afterPublicChange?.();
       return labView(deps.db, id);
     },
 
@@ -189,6 +192,7 @@ export function createReportsService(deps: Pick<ServiceDeps, 'db' | 'clock' | 'q
         await audit({ trx, clock: deps.clock, caller, action: 'report.correct', entity: { type: 'report', id }, before: { status: 'published', version: report.currentVersion }, after: { status: 'published', version, note: body.changeNote } });
         await hooks.onPublished?.(trx, id, version, 'correct');
       });
+      hooks.afterPublicChange?.();
       return labView(deps.db, id);
     },
 
@@ -201,6 +205,7 @@ export function createReportsService(deps: Pick<ServiceDeps, 'db' | 'clock' | 'q
         await reportsRepo.retract(trx, id, reason, deps.clock.now());
         await audit({ trx, clock: deps.clock, caller, action: 'report.retract', entity: { type: 'report', id }, before: { status: 'published' }, after: { status: 'retracted', note: reason } });
       });
+      hooks.afterPublicChange?.();
       return labView(deps.db, id);
     },
   };

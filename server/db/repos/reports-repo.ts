@@ -137,6 +137,12 @@ export const reportsRepo = {
     return rows.map((r) => ({ version: r.version, publishedAt: iso(r.published_at)!, changeNote: r.change_note }));
   },
 
+  /** A stamp that changes whenever anything public may have changed: the count and last change of public reports. */
+  async publicStamp(db: Knex): Promise<string> {
+    const r = await db('reports').whereIn('status', ['published', 'retracted']).first(db.raw('count(*)::int as n'), db.raw('max(updated_at) as last'));
+    return `${r?.n ?? 0}:${r?.last ? iso(r.last) : ''}`;
+  },
+
   /** Published and retracted reports with their current version (for the index, feed and sitemap). */
   async currentVersions(db: Knex, statuses: readonly ('published' | 'retracted')[]): Promise<{ report: ReportRecord; version: ReportVersionRecord; firstPublishedAt: string }[]> {
     const rows = await db('reports as r')
