@@ -33,6 +33,17 @@ async function waitAnalysed(page: Page, expected: number) {
   await page.getByRole('progressbar', { name: 'Analysis' }).and(page.locator(`[aria-valuenow="${expected}"]`)).waitFor({ timeout: 90_000 });
 }
 
+/** Until no reading of the run awaits analysis and its figures are current (bounded: 90 s). */
+async function settled(page: Page, runId: string) {
+  for (let i = 0; i < 180; i++) {
+    const run = await (await page.request.get(`/api/lab/runs/${runId}`)).json();
+    const readings = await (await page.request.get(`/api/lab/runs/${runId}/readings`)).json();
+    if (!run.run.progress.analysing && readings.readings.every((r: { state: string }) => r.state !== 'pending')) return;
+    await page.waitForTimeout(500);
+  }
+  throw new Error('the run did not settle within 90 s');
+}
+
 describe('the lab workflow in Chromium, against the real server, worker and database', () => {
   let dir: string;
   let files: string[];
@@ -136,6 +147,10 @@ describe('the lab workflow in Chromium, against the real server, worker and data
       await t.getByLabel('Spectrum files').setInputFiles([replacement]);
       await t.getByRole('button', { name: /Upload 1 file/ }).click();
       await t.getByText(/1 file stored and queued for analysis/).waitFor({ timeout: 60_000 });
+      // The bar may still show the count from before the replacement: ask the server until the
+      // new file is analysed and the figures are current, then let the page catch up.
+      await settled(t, runUrl.split('/').pop()!);
+      await t.reload();
       await waitAnalysed(t, 135);
       await t.getByRole('button', { name: 'Submit for review' }).click();
       await t.getByText('Submitted for review.').waitFor();

@@ -59,7 +59,7 @@ describe('catalogue page: the list state lives in the URL', () => {
     await user.click(screen.getByRole('button', { name: 'Next page' }));
     expect(router.state.location.search).toBe('?tab=makers&page=2');
     await waitFor(() => expect(listCalls(calls, '/api/lab/makers').at(-1)?.query.page).toBe('2'));
-    expect(screen.getByRole('navigation', { name: 'Pages of makers' }).textContent).toContain('Page 2 of 3');
+    await waitFor(() => expect(screen.getByRole('navigation', { name: 'Pages of makers' }).textContent).toContain('Page 2 of 3'));
 
     await router.navigate(-1);
     expect(router.state.location.search).toBe('?tab=makers');
