@@ -68,7 +68,11 @@ async function main() {
   const runFiles = manifest.runs[0].files.map((f) => ({ name: f.path.split('/').pop()!, bytes: text.get(f.path)! }));
 
   const port = await freePort();
-  const env = { DATABASE_URL: databaseUrl, PORT: String(port), HOST: '127.0.0.1', LOG_LEVEL: 'warn', NODE_ENV: 'production', SERVE_CLIENT: 'false' };
+  // Production requires the payment keys; nothing measured here pays, so placeholders do.
+  const env = {
+    DATABASE_URL: databaseUrl, PORT: String(port), HOST: '127.0.0.1', LOG_LEVEL: 'warn', NODE_ENV: 'production', SERVE_CLIENT: 'false',
+    PAYMENTS_SECRET_KEY: 'sk_test_benchmark_never_used', PAYMENTS_WEBHOOK_SECRET: 'whsec_benchmark_never_used',
+  };
   const server = child('main.ts', env);
   const worker = child('worker.ts', env);
   const base = `http://127.0.0.1:${port}`;

@@ -132,8 +132,10 @@ async function main() {
 
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
+  // Production requires the payment keys; nothing measured here pays, so placeholders do.
   const server = startChild(['--import', 'tsx', path.join(ROOT, 'server', 'main.ts')], {
     DATABASE_URL: databaseUrl, PORT: String(port), HOST: '127.0.0.1', LOG_LEVEL: 'warn', NODE_ENV: 'production', SERVE_CLIENT: 'true',
+    PAYMENTS_SECRET_KEY: 'sk_test_benchmark_never_used', PAYMENTS_WEBHOOK_SECRET: 'whsec_benchmark_never_used',
   });
   const staticDir = mkdtempSync(path.join(os.tmpdir(), 'benchlight-bench-static-'));
   let staticServer: ChildProcess | null = null;

@@ -2,8 +2,9 @@
  * npm run demo: the whole app with demo data on this machine. Starts the project's
  * PostgreSQL (unless DATABASE_URL is set), migrates, seeds the demo accounts, writes the demo
  * instrument exports to demo-data/, builds the client and
- * runs the web server (API and pages) with the worker beside it. Ctrl-C stops both;
- * `npm run db:stop` stops PostgreSQL.
+ * runs the web server (API and pages) with the worker beside it, and the local fake payment
+ * provider in this process (unless PAYMENTS_SECRET_KEY is set: then the provider it names).
+ * Ctrl-C stops them all; `npm run db:stop` stops PostgreSQL.
  */
 import { spawn } from 'node:child_process';
 import path from 'node:path';
@@ -11,6 +12,7 @@ import { start } from '#server/db/embedded-postgres.ts';
 import { resolveDatabaseUrl } from '#server/db/database-url.ts';
 import { DEMO_USERS } from '#seeds/data/demo-users.ts';
 import { buildClient, knexCli, runStep, ROOT, seedDemoData } from './lib/run-step.ts';
+import { fakePaymentsEnv, LOCAL_FAKE_PAYMENTS, startLocalFakePayments } from './lib/local-fake-payments.ts';
 
 async function main() {
   if (process.env.NODE_ENV === 'production') throw new Error('The demo does not run with NODE_ENV=production.');
@@ -29,8 +31,25 @@ async function main() {
   console.log('\nDemo accounts:');
   for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(7)} ${u.email}  /  ${u.password}`);
   console.log('');
+  // Payments go to the local fake (its state kept in .data/, so a restarted demo keeps its
+  // checkouts and balance), unless real provider keys were given.
+  const fake = process.env.PAYMENTS_SECRET_KEY
+    ? null
+    : await startLocalFakePayments({
+        port: LOCAL_FAKE_PAYMENTS.port,
+        webhookUrl: `http://127.0.0.1:${process.env.PORT ?? 3000}/api/payments/webhook`,
+        webhookSecret: LOCAL_FAKE_PAYMENTS.webhookSecret,
+        dataFile: LOCAL_FAKE_PAYMENTS.dataFile,
+      });
+  if (fake) console.log(`Fake payment provider (local test, no money moves): ${fake.url}  ·  its events: ${fake.url}/__fake/events\n`);
   // Request logs stay quiet in the demo unless LOG_LEVEL asks for them.
-  const env = { ...process.env, SERVE_CLIENT: 'true', DATABASE_URL: databaseUrl, LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn' };
+  const env = {
+    ...process.env,
+    SERVE_CLIENT: 'true',
+    DATABASE_URL: databaseUrl,
+    LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn',
+    ...(fake ? fakePaymentsEnv(fake, LOCAL_FAKE_PAYMENTS.webhookSecret) : {}),
+  };
   // The worker runs the queued jobs (file analysis); the web server serves the API and the pages.
   const worker = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'worker.ts')], { cwd: ROOT, stdio: 'inherit', env });
   const server = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'main.ts')], { cwd: ROOT, stdio: 'inherit', env });
@@ -38,11 +57,12 @@ async function main() {
   const forward = (signal: NodeJS.Signals) => children.forEach((c) => c.kill(signal));
   process.on('SIGINT', forward);
   process.on('SIGTERM', forward);
-  // When either stops, stop the other and leave with its code.
+  // When either stops, stop the other and leave with its code; the fake stops with the last.
   for (const c of children) {
     c.on('exit', (code) => {
       for (const other of children) if (other !== c && other.exitCode === null) other.kill('SIGTERM');
       process.exitCode = code ?? 0;
+      if (children.every((child) => child.exitCode !== null || child.signalCode !== null)) void fake?.close();
     });
   }
 }

@@ -13,6 +13,9 @@ import type { Clock, ServiceDeps } from './core/context.ts';
 import { createSessionAuth, type SessionAuth } from './auth/session-auth.ts';
 import { createSignInLimiter, type SignInLimiter } from './auth/sign-in-limiter.ts';
 import { createServices } from './services/index.ts';
+import type { PaymentEventHandlers } from './services/payment-events-service.ts';
+import type { PaymentProvider } from './payments/payment-provider.ts';
+import { createPaymentProvider } from './payments/create-payment-provider.ts';
 import { pingDatabase } from './db/ping.ts';
 import { sessionMiddleware } from './http/session-middleware.ts';
 import { originCheck } from './http/origin-check.ts';
@@ -26,6 +29,7 @@ import { runsRoutes } from './routes/runs-routes.ts';
 import { reportsRoutes } from './routes/reports-routes.ts';
 import { publicRoutes } from './routes/public-routes.ts';
 import { siteRoutes } from './routes/site-routes.ts';
+import { paymentsWebhookRoutes } from './routes/payments-routes.ts';
 import { withPageMeta } from './http/index-html.ts';
 import { publicBaseUrl } from './http/public-url.ts';
 
@@ -39,6 +43,10 @@ export interface AppDeps {
   queue: JobQueue;
   /** Raw-file storage; PostgreSQL (stored_files) when absent. */
   storage?: FileStorage;
+  /** The payment provider; built from the PAYMENTS_* configuration when absent. */
+  payments?: PaymentProvider;
+  /** Handlers for the provider's webhook events, by type (tests register their own). */
+  paymentEventHandlers?: PaymentEventHandlers;
   /** Overridable for tests; built from db.pool when absent. */
   sessions?: SessionAuth;
   signInLimiter?: SignInLimiter;
@@ -66,8 +74,9 @@ export function createApp(deps: AppDeps): Express {
     logger,
     queue: deps.queue,
     storage: deps.storage ?? createPgFileStorage(db.knex),
+    payments: deps.payments ?? createPaymentProvider(config),
   };
-  const services = createServices(serviceDeps);
+  const services = createServices(serviceDeps, { paymentEventHandlers: deps.paymentEventHandlers });
 
   const app = express();
   app.disable('x-powered-by');
@@ -84,6 +93,10 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
   app.use(securityHeaders);
+
+  // The provider's webhook reads its body raw (the signature covers the bytes) and sits outside
+  // the session and the Origin check: it comes from the provider, signed, not from a browser.
+  app.use(paymentsWebhookRoutes(services));
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));

@@ -4,6 +4,9 @@ import { z } from 'zod';
  * Configuration, read once at start through this schema. .env.example lists every variable.
  * Nothing else in server/ reads process.env.
  */
+/** An empty variable (NAME= in a shell or an env file) counts as unset. */
+const optionalText = <T extends z.ZodType>(schema: T) => z.preprocess((v) => (v === '' ? undefined : v), schema.optional());
+
 const booleanFromString = z
   .enum(['true', 'false', '1', '0', 'yes', 'no', ''])
   .transform((v) => v === 'true' || v === '1' || v === 'yes');
@@ -31,6 +34,18 @@ export const configSchema = z.object({
   MAIL_FROM: z.string().default('Benchlight <no-reply@benchlight.invalid>'),
   /** The site's public address (https://…), for citations, the feed, the sitemap and e-mail links; else taken from each request. */
   PUBLIC_BASE_URL: z.string().url().optional(),
+  /** The payment provider's secret API key (sk_…); payments answer 503 without it outside production. */
+  PAYMENTS_SECRET_KEY: optionalText(z.string().min(1)),
+  /** The signing secret of the provider's webhook endpoint (whsec_…). */
+  PAYMENTS_WEBHOOK_SECRET: optionalText(z.string().min(1)),
+  /** Another address for the provider's API: the local fake (npm run payments:fake). Unset: the provider's own. */
+  PAYMENTS_API_URL: optionalText(z.string().url()),
+  /** The currency readers pay in, ISO 4217. */
+  PAYMENTS_CURRENCY: z
+    .string()
+    .regex(/^[A-Za-z]{3}$/, { message: 'A three-letter currency code, e.g. EUR.' })
+    .transform((c) => c.toUpperCase())
+    .default('EUR'),
 });
 
 export type Config = z.infer<typeof configSchema> & { serveClient: boolean };
@@ -42,5 +57,19 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
   }
   const c = parsed.data;
+  const production = productionProblems(c);
+  if (production.length) throw new Error(`Invalid configuration:\n${production.map((l) => `  ${l}`).join('\n')}`);
   return { ...c, serveClient: c.SERVE_CLIENT ?? c.NODE_ENV === 'production' };
+}
+
+/** What production refuses: no payments without both keys, and never a fake or plain-http provider address. */
+function productionProblems(c: z.infer<typeof configSchema>): string[] {
+  if (c.NODE_ENV !== 'production') return [];
+  const problems: string[] = [];
+  if (!c.PAYMENTS_SECRET_KEY) problems.push('PAYMENTS_SECRET_KEY: required in production');
+  if (!c.PAYMENTS_WEBHOOK_SECRET) problems.push('PAYMENTS_WEBHOOK_SECRET: required in production');
+  if (c.PAYMENTS_API_URL && !c.PAYMENTS_API_URL.startsWith('https://')) {
+    problems.push('PAYMENTS_API_URL: must be unset or https:// in production (the local fake never runs there)');
+  }
+  return problems;
 }

@@ -13,6 +13,8 @@ import { systemClock, type Clock, type ServiceDeps } from './core/context.ts';
 import { createServices, type Services } from './services/index.ts';
 import { startJobQueue, type JobQueue } from './queue/job-queue.ts';
 import { createPgFileStorage } from './storage/file-storage.ts';
+import type { PaymentProvider } from './payments/payment-provider.ts';
+import { createUnconfiguredPaymentProvider } from './payments/unconfigured-provider.ts';
 
 export interface Connection {
   db: DbHandles;
@@ -30,6 +32,11 @@ export interface ConnectOptions {
   signInLimits?: { perAccount: number; perIp: number; windowMinutes: number };
   /** The worker supervises the job queue (expires lost jobs); other processes only queue. */
   superviseQueue?: boolean;
+  /**
+   * The payment provider (the worker passes createPaymentProvider(config)). Absent, payment calls
+   * answer 503: the seed and user:create need none, and must not require payment keys to run.
+   */
+  payments?: PaymentProvider;
 }
 
 export async function connect(options: ConnectOptions = {}): Promise<Connection> {
@@ -46,6 +53,7 @@ export async function connect(options: ConnectOptions = {}): Promise<Connection>
     logger,
     queue,
     storage: createPgFileStorage(db.knex),
+    payments: options.payments ?? createUnconfiguredPaymentProvider(),
   };
   const close = async () => {
     await queue.stop();

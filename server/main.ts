@@ -9,6 +9,7 @@ import { createLogger } from './logger.ts';
 import { createMailer } from './mail/mailer.ts';
 import { createApp } from './app.ts';
 import { startJobQueue } from './queue/job-queue.ts';
+import { createPaymentProvider } from './payments/create-payment-provider.ts';
 
 const config = loadConfig();
 const logger = createLogger(config.LOG_LEVEL);
@@ -17,7 +18,9 @@ const db = createDb(databaseUrl, (err) => logger.warn({ err: err.message }, 'dat
 const mailer = createMailer({ smtpUrl: config.SMTP_URL, from: config.MAIL_FROM, logger });
 // The web process only queues jobs; the worker (npm run worker) runs them.
 const queue = await startJobQueue({ databaseUrl, logger, supervise: false });
-const app = createApp({ config, db, mailer, clock: { now: () => new Date() }, logger, queue });
+// Stripe through its SDK, or the local fake when PAYMENTS_API_URL points at it (never in production).
+const payments = createPaymentProvider(config);
+const app = createApp({ config, db, mailer, clock: { now: () => new Date() }, logger, queue, payments });
 
 const server = app.listen(config.PORT, config.HOST, () => {
   const address = server.address();

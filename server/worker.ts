@@ -8,10 +8,16 @@ import { connect } from './connect.ts';
 import { resolveDatabaseUrl } from './db/database-url.ts';
 import { createLogger } from './logger.ts';
 import { registerJobHandlers } from './job-handlers.ts';
+import { createPaymentProvider } from './payments/create-payment-provider.ts';
 
 const config = loadConfig();
 const logger = createLogger(config.LOG_LEVEL);
-const app = await connect({ databaseUrl: resolveDatabaseUrl({ DATABASE_URL: config.DATABASE_URL }), logger, superviseQueue: true });
+const app = await connect({
+  databaseUrl: resolveDatabaseUrl({ DATABASE_URL: config.DATABASE_URL }),
+  logger,
+  superviseQueue: true,
+  payments: createPaymentProvider(config),
+});
 await registerJobHandlers(app.queue, app.services, logger);
 logger.info('worker started');
 console.log('Benchlight worker is running.');

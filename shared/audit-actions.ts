@@ -33,5 +33,6 @@ export const AUDIT_ACTIONS = [
   'report.publish',
   'report.correct',
   'report.retract',
+  'payment_event.receive',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

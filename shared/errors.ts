@@ -7,6 +7,8 @@ import { z } from 'zod';
 export const ERROR_STATUS = {
   validation_failed: 422,
   bad_request: 400,
+  /** A payment-provider webhook whose signature is missing, malformed or does not match. */
+  bad_signature: 400,
   unauthenticated: 401,
   invalid_credentials: 401,
   forbidden: 403,
@@ -17,6 +19,10 @@ export const ERROR_STATUS = {
   payload_too_large: 413,
   rate_limited: 429,
   database_unavailable: 503,
+  /** The payment provider could not be reached or answered with a server error; try again later. */
+  payment_provider_unavailable: 503,
+  /** The payment provider refused the request (details carry its own type and code). */
+  payment_provider_error: 502,
   internal: 500,
 } as const;
 export type ErrorCode = keyof typeof ERROR_STATUS;

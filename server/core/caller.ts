@@ -1,7 +1,7 @@
 import type { SessionUser } from '#shared/schemas/users.ts';
 
-/** Who runs a command that no person signed in for. */
-export type SystemLabel = 'cli' | 'worker' | 'seed';
+/** Who runs a command that no person signed in for ('payments': the provider's signed webhook). */
+export type SystemLabel = 'cli' | 'worker' | 'seed' | 'payments';
 
 interface CallerBase {
   /** Client address, for rate limits and logs; absent for system callers. */

@@ -5,6 +5,7 @@ import type { SignInLimiter } from '../auth/sign-in-limiter.ts';
 import type { Mailer } from '../mail/mailer.ts';
 import type { JobQueue } from '../queue/job-queue.ts';
 import type { FileStorage } from '../storage/file-storage.ts';
+import type { PaymentProvider } from '../payments/payment-provider.ts';
 
 export interface Clock {
   now(): Date;
@@ -25,4 +26,6 @@ export interface ServiceDeps {
   logger: Logger;
   queue: JobQueue;
   storage: FileStorage;
+  /** The payment provider (Stripe through its SDK, or the local fake at PAYMENTS_API_URL). */
+  payments: PaymentProvider;
 }

@@ -11,9 +11,15 @@ import { createRunUploadsService } from './run-uploads-service.ts';
 import { createRunProcessingService } from './run-processing-service.ts';
 import { createReportsService } from './reports-service.ts';
 import { createPublicReportsService } from './public-reports-service.ts';
+import { createPaymentEventsService, type PaymentEventHandlers } from './payment-events-service.ts';
+
+export interface ServicesOptions {
+  /** What to do with each kind of payment-provider event (none yet: events are only stored). */
+  paymentEventHandlers?: PaymentEventHandlers;
+}
 
 /** Every service, built once from the same collaborators (the web app, scripts and tests share this). */
-export function createServices(deps: ServiceDeps) {
+export function createServices(deps: ServiceDeps, options: ServicesOptions = {}) {
   const publicReports = createPublicReportsService(deps);
   return {
     auth: createAuthService(deps),
@@ -28,6 +34,7 @@ export function createServices(deps: ServiceDeps) {
     runProcessing: createRunProcessingService(deps),
     reports: createReportsService(deps, { afterPublicChange: () => publicReports.forget() }),
     publicReports,
+    paymentEvents: createPaymentEventsService(deps, { handlers: options.paymentEventHandlers }),
   };
 }
 export type Services = ReturnType<typeof createServices>;

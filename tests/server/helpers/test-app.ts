@@ -2,7 +2,7 @@ import { inject } from 'vitest';
 import pino from 'pino';
 import request from 'supertest';
 import { randomUUID } from 'node:crypto';
-import type { Server } from 'node:http';
+import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { createApp } from '#server/app.ts';
 import { loadConfig, type Config } from '#server/config.ts';
@@ -17,17 +17,58 @@ import { createSignInLimiter } from '#server/auth/sign-in-limiter.ts';
 import { createServices } from '#server/services/index.ts';
 import { createPgFileStorage } from '#server/storage/file-storage.ts';
 import { registerJobHandlers } from '#server/job-handlers.ts';
+import { createPaymentProvider } from '#server/payments/create-payment-provider.ts';
+import { startFakePaymentProvider, type FakePaymentProvider } from '#server/payments/fake-provider/start-fake-provider.ts';
+import type { PaymentEventHandlers } from '#server/services/payment-events-service.ts';
+
+export interface TestAppOptions {
+  /** Run the worker's job handlers in this process. */
+  worker?: boolean;
+  /**
+   * Start the local fake payment provider in this process (127.0.0.1, a free port), deliver its
+   * webhooks to this app, and point the app's provider at it. Without it, payments are unconfigured.
+   */
+  payments?: boolean | { retryDelaysMs?: number[]; maxNetworkRetries?: number; dataFile?: string };
+  /** Handlers for the provider's webhook events, as the pledge code will register them. */
+  paymentEventHandlers?: PaymentEventHandlers;
+}
 
 /**
  * The real app on the real test database, listening on an ephemeral 127.0.0.1 port so the
  * Origin check sees a real host; mail is collected in memory. `origin` is the app's own origin.
+ * With `payments`, `fake` is the local fake payment provider the app talks to.
  */
 export async function makeTestApp(
   overrides: Partial<Record<string, string>> = {},
   databaseUrl: string = inject('databaseUrl'),
-  options: { worker?: boolean } = {},
+  options: TestAppOptions = {},
 ) {
-  const config: Config = loadConfig({ NODE_ENV: 'test', LOG_LEVEL: 'silent', ...overrides });
+  // The port first: the fake needs the app's webhook address before the app is built.
+  const server = await new Promise<Server>((resolve) => {
+    const s = createServer();
+    s.listen(0, '127.0.0.1', () => resolve(s));
+  });
+  const origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  let fake: FakePaymentProvider | null = null;
+  const paymentEnv: Record<string, string> = {};
+  if (options.payments) {
+    const fakeOptions = options.payments === true ? {} : options.payments;
+    paymentEnv.PAYMENTS_SECRET_KEY = `sk_test_${randomUUID().replaceAll('-', '')}`;
+    paymentEnv.PAYMENTS_WEBHOOK_SECRET = `whsec_${randomUUID().replaceAll('-', '')}`;
+    fake = await startFakePaymentProvider({
+      host: '127.0.0.1',
+      webhookUrl: `${origin}/api/payments/webhook`,
+      webhookSecret: paymentEnv.PAYMENTS_WEBHOOK_SECRET,
+      secretKey: paymentEnv.PAYMENTS_SECRET_KEY,
+      retryDelaysMs: fakeOptions.retryDelaysMs ?? [20, 40, 80, 160, 320],
+      dataFile: fakeOptions.dataFile,
+    });
+    paymentEnv.PAYMENTS_API_URL = fake.url;
+  }
+  const config: Config = loadConfig({ NODE_ENV: 'test', LOG_LEVEL: 'silent', ...paymentEnv, ...overrides });
+  // One SDK retry (its own 0.5–1 s backoff) keeps a failing call in a test short.
+  const maxNetworkRetries = typeof options.payments === 'object' ? (options.payments.maxNetworkRetries ?? 1) : 1;
+  const payments = createPaymentProvider(config, { maxNetworkRetries, timeoutMs: 5000 });
   const db: DbHandles = createDb(databaseUrl, () => {});
   const sent: MailMessage[] = [];
   const mailer: Mailer = { send: async (m) => void sent.push(m) };
@@ -35,7 +76,7 @@ export async function makeTestApp(
   // The real queue in the test database: uploads queue their jobs; tests run them with runJobs().
   const queue = await startJobQueue({ databaseUrl, logger, supervise: false });
   const clock = { now: () => new Date() };
-  const app = createApp({ config, db, mailer, clock, logger, queue });
+  const app = createApp({ config, db, mailer, clock, logger, queue, payments, paymentEventHandlers: options.paymentEventHandlers });
   const sessions = createSessionAuth(db.pool);
   const services = createServices({
     db: db.knex,
@@ -46,19 +87,19 @@ export async function makeTestApp(
     logger,
     queue,
     storage: createPgFileStorage(db.knex),
-  });
+    payments,
+  }, { paymentEventHandlers: options.paymentEventHandlers });
   // The worker's handlers in this process, on the same queue, for tests that need files analysed.
   if (options.worker) await registerJobHandlers(queue, services, logger);
-  const server = await new Promise<Server>((resolve) => {
-    const s = app.listen(0, '127.0.0.1', () => resolve(s));
-  });
-  const origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  server.on('request', app);
   const close = async () => {
+    // The fake first, so no delivery arrives at an app that is going away.
+    await fake?.close();
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await queue.stop();
     await closeDb(db);
   };
-  return { app, db, queue, services, sent, origin, api: () => request(origin), agent: () => request.agent(origin), close };
+  return { app, config, db, queue, services, sent, origin, payments, fake, api: () => request(origin), agent: () => request.agent(origin), close };
 }
 
 /**
