@@ -24,6 +24,7 @@ export const LAB_SECTIONS: readonly LabSection[] = [
   { path: 'runs/:runId', label: 'Run', capability: 'lab.enter', action: 'see runs', inNav: false, load: () => import('./routes/lab/run.tsx') },
   { path: 'check', label: 'File check', capability: 'runs.upload', action: 'check instrument files', inNav: true, load: () => import('./routes/lab/file-check.tsx') },
   { path: 'catalog', label: 'Catalog', capability: 'catalog.manage', action: 'manage the catalog', inNav: true, load: () => import('./routes/lab/catalog.tsx') },
+  { path: 'reports/:id/preview', label: 'Report preview', capability: 'reports.publish', action: 'preview reports', inNav: false, load: () => import('./routes/lab/report-preview.tsx') },
   { path: 'review', label: 'Review', capability: 'runs.review', action: 'review runs', inNav: true, load: () => import('./routes/lab/review.tsx') },
   { path: 'admin/users', label: 'Users', capability: 'users.manage', action: 'manage users', inNav: true, load: () => import('./routes/lab/users.tsx') },
 ];

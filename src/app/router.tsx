@@ -84,6 +84,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           children: [
             { index: true, lazy: () => import('./routes/public/home.tsx').then(c) },
             { path: 'reports', lazy: () => import('./routes/public/reports.tsx').then(c) },
+            { path: 'reports/:slug', lazy: () => import('./routes/public/report.tsx').then(c) },
+            { path: 'reports/:slug/versions/:n', lazy: () => import('./routes/public/report.tsx').then(c) },
             { path: 'compare', lazy: () => import('./routes/public/compare.tsx').then(c) },
             { path: 'methodology', lazy: () => import('./routes/public/methodology.tsx').then(c) },
             { path: 'request', lazy: () => import('./routes/public/request.tsx').then(c) },

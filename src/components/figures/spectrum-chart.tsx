@@ -1,7 +1,8 @@
 import { useId, useMemo } from 'react';
-import { Area, AreaChart, CartesianGrid, ReferenceArea, Tooltip, XAxis, YAxis } from 'recharts';
+import { Area, AreaChart, CartesianGrid, ReferenceArea, ReferenceDot, Tooltip, XAxis, YAxis } from 'recharts';
 import type { Spectrum } from '#shared/measurement/import/spectrum-import.ts';
 import { DEFAULT_BANDS } from '#shared/measurement/spectral/band-list.ts';
+import { TRADE_CHART_UNITS, type ChartUnits } from './chart-units.ts';
 import { DATA_COLORS } from './data-colors.ts';
 import { downsampleMinMax } from './downsample.ts';
 import { formatCount, formatFigure, formatLength, formatTick } from '#src/lib/format.ts';
@@ -21,12 +22,31 @@ function wavelengthTicks(lo: number, hi: number): number[] {
   return ticks;
 }
 
+/** "660 nm": how a peak is labelled on the chart and named in lists. */
+export function peakLabel(peakNm: number): string {
+  return `${formatLength(peakNm)} nm`;
+}
+
 /**
- * Spectral irradiance against wavelength, with the red and near-infrared bands shaded.
- * Drawn in mW/cm²/nm (1 W/m²/nm = 0.1 mW/cm²/nm) to match the band figures.
+ * Spectral irradiance against wavelength, with the red and near-infrared bands shaded and, when
+ * given, the emission peaks marked and labelled with their wavelength.
+ * Drawn in mW/cm²/nm (1 W/m²/nm = 0.1 mW/cm²/nm) to match the band figures, or per nm in the
+ * reader's irradiance unit when `units` is given (W/m²/nm).
  */
-export function SpectrumChart({ spectrum, fileName }: { spectrum: Spectrum; fileName: string }) {
+export function SpectrumChart({
+  spectrum,
+  fileName,
+  peaks = [],
+  units,
+}: {
+  spectrum: Spectrum;
+  fileName: string;
+  peaks?: readonly { peakNm: number }[];
+  units?: ChartUnits;
+}) {
   const titleId = useId();
+  const u = units ?? TRADE_CHART_UNITS;
+  const spectralUnit = `${u.irradiance}/nm`;
   const n = spectrum.wavelengthNm.length;
   const lo = spectrum.wavelengthNm[0];
   const hi = spectrum.wavelengthNm[n - 1];
@@ -36,8 +56,17 @@ export function SpectrumChart({ spectrum, fileName }: { spectrum: Spectrum; file
     let below = 0;
     for (let i = 0; i < n; i++) if (spectrum.irradianceWm2Nm[i] < 0) below++;
     // Display only: negative noise is drawn at zero; every figure uses the signed values.
-    return { points: thinned.map((p) => ({ nm: p.x, value: Math.max(0, p.y / 10) })), negatives: below };
-  }, [spectrum, n]);
+    return { points: thinned.map((p) => ({ nm: p.x, value: Math.max(0, u.irradianceValue(p.y / 10)) })), negatives: below };
+  }, [spectrum, n, u]);
+
+  // Each peak sits on the drawn line at the sample nearest its wavelength (display only).
+  const marks = peaks.map((p) => {
+    let best = 0;
+    for (let i = 1; i < n; i++) {
+      if (Math.abs(spectrum.wavelengthNm[i] - p.peakNm) < Math.abs(spectrum.wavelengthNm[best] - p.peakNm)) best = i;
+    }
+    return { nm: p.peakNm, value: Math.max(0, u.irradianceValue(spectrum.irradianceWm2Nm[best] / 10)) };
+  });
 
   const shaded = BANDS.map((b) => ({ ...b, from: Math.max(DEFAULT_BANDS[b.key].loNm, lo), to: Math.min(DEFAULT_BANDS[b.key].hiNm, hi) })).filter(
     (b) => b.to > b.from,
@@ -47,6 +76,7 @@ export function SpectrumChart({ spectrum, fileName }: { spectrum: Spectrum; file
     <figure aria-labelledby={titleId} className="space-y-2">
       <p id={titleId} className="sr-only">
         Spectrum chart of {fileName}
+        {marks.length > 0 ? `; emission peaks at ${marks.map((m) => peakLabel(m.nm)).join(', ')}` : ''}
       </p>
       <div className="h-72 w-full font-sans" data-chart="spectrum">
         <AreaChart
@@ -82,10 +112,10 @@ export function SpectrumChart({ spectrum, fileName }: { spectrum: Spectrum; file
             tick={{ fill: DATA_COLORS.inkMuted, fontSize: 12 }}
             stroke={DATA_COLORS.inkMuted}
             width={56}
-            label={{ value: 'mW/cm²/nm', angle: -90, position: 'insideLeft', offset: -12, fill: DATA_COLORS.ink, fontSize: 12 }}
+            label={{ value: spectralUnit, angle: -90, position: 'insideLeft', offset: -12, fill: DATA_COLORS.ink, fontSize: 12 }}
           />
           <Tooltip
-            formatter={(v) => [`${formatFigure(Number(v))} mW/cm²/nm`, 'Spectral irradiance']}
+            formatter={(v) => [`${formatFigure(Number(v))} ${spectralUnit}`, 'Spectral irradiance']}
             labelFormatter={(nm) => `${formatLength(Number(nm))} nm`}
           />
           <Area
@@ -98,10 +128,21 @@ export function SpectrumChart({ spectrum, fileName }: { spectrum: Spectrum; file
             isAnimationActive={false}
             dot={false}
           />
+          {marks.map((m) => (
+            <ReferenceDot
+              key={m.nm}
+              x={m.nm}
+              y={m.value}
+              r={3.5}
+              fill={DATA_COLORS.ink}
+              stroke={DATA_COLORS.paper}
+              label={{ value: peakLabel(m.nm), position: 'right', fill: DATA_COLORS.ink, fontSize: 12, fontWeight: 600 }}
+            />
+          ))}
         </AreaChart>
       </div>
       <figcaption className="font-sans text-xs text-ink-soft">
-        Spectral irradiance (mW/cm²/nm) against wavelength; red {DEFAULT_BANDS.red.loNm}–{DEFAULT_BANDS.red.hiNm} nm and
+        Spectral irradiance ({spectralUnit}) against wavelength; red {DEFAULT_BANDS.red.loNm}–{DEFAULT_BANDS.red.hiNm} nm and
         near-infrared {DEFAULT_BANDS.nir.loNm}–{DEFAULT_BANDS.nir.hiNm} nm shaded.{' '}
         {negatives > 0
           ? `${formatCount(negatives)} ${negatives === 1 ? 'value' : 'values'} below zero (detector noise) are drawn at zero; the figures use them as measured.`
