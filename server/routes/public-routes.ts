@@ -1,6 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { Router, type Response } from 'express';
+import { Router, type Request, type Response } from 'express';
 import { z } from 'zod';
 import { publicBaseUrl } from '../http/public-url.ts';
 import { parseWith } from '../http/validate.ts';
@@ -57,11 +57,10 @@ export function publicRoutes(s: Pick<Services, 'publicReports'>, opts: { publicB
     res.setHeader('Content-Disposition', `attachment; filename="${slug}-v${n}-readings.csv"`);
     res.send(await s.publicReports.readingsCsv(slug, n));
   });
-  router.get('/public/reports/:slug/figures.json', async (req, res) => {
-    const { slug } = parseWith(slugParams, req.params, 'params');
-    const r = await s.publicReports.get(slug, null, publicBaseUrl(req, opts.publicBaseUrl));
+  const figures = async (req: Request, res: Response, slug: string, n: number | null) => {
+    const r = await s.publicReports.get(slug, n, publicBaseUrl(req, opts.publicBaseUrl));
     cacheable(res);
-    res.setHeader('Content-Disposition', `attachment; filename="${slug}-figures.json"`);
+    res.setHeader('Content-Disposition', `attachment; filename="${slug}${n === null ? '' : `-v${n}`}-figures.json"`);
     res.json({
       report: { slug: r.slug, title: r.title, version: r.version, publishedAt: r.publishedAt, retracted: r.retracted },
       units: {
@@ -89,6 +88,14 @@ export function publicRoutes(s: Pick<Services, 'publicReports'>, opts: { publicB
       keyFigures: r.keyFigures,
       citation: r.citation,
     });
+  };
+  router.get('/public/reports/:slug/figures.json', async (req, res) => {
+    const { slug } = parseWith(slugParams, req.params, 'params');
+    await figures(req, res, slug, null);
+  });
+  router.get('/public/reports/:slug/versions/:n/figures.json', async (req, res) => {
+    const { slug, n } = parseWith(versionParams, req.params, 'params');
+    await figures(req, res, slug, n);
   });
   router.get('/public/methodology', (_req, res) => {
     methodology ??= renderDocument(fs.readFileSync(methodologyFile, 'utf8'));

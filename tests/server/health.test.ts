@@ -19,6 +19,9 @@ describe('GET /api/health', () => {
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ status: 'ok', db: 'ok' });
     expect(res.headers['x-request-id']).toMatch(/^[0-9a-f-]{36}$/);
+    // Scripts from our own origin only; WebAssembly may compile (the planner's solver), eval may not.
+    expect(res.headers['content-security-policy']).toContain("script-src 'self' 'wasm-unsafe-eval';");
+    expect(res.headers['content-security-policy']).not.toContain('unsafe-eval;');
   });
 
   it('answers 503 with db down when PostgreSQL cannot be reached', async () => {

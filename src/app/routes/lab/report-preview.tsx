@@ -8,6 +8,7 @@ import { Spinner } from '#src/components/spinner.tsx';
 import { meQueryOptions } from '#src/features/auth/api/get-me.ts';
 import { previewQueryOptions, usePreview } from '#src/features/report/api/get-preview.ts';
 import { ReportView } from '#src/features/report/components/report-view.tsx';
+import { ReportPlanner } from '#src/app/compose/report-planner.tsx';
 import { isApiError } from '#src/lib/api-client.ts';
 
 export const clientLoader =
@@ -39,5 +40,5 @@ export default function ReportPreviewRoute() {
     }
     return <ErrorState error={preview.error} onRetry={() => void preview.refetch()} />;
   }
-  return report ? <ReportView report={report} /> : null;
+  return report ? <ReportView report={report} planner={<ReportPlanner report={report} />} /> : null;
 }

@@ -47,6 +47,11 @@ describe('public report page', { timeout: 30_000 }, () => {
       'History and data',
     ];
     expect(h2.filter((t) => order.includes(t ?? ''))).toEqual(order);
+    // The session planner, loaded on demand, sits after the dose table and is in the contents.
+    const planner = await screen.findByRole('heading', { level: 2, name: 'Session planner' }, SLOW);
+    const doseHeading = screen.getByRole('heading', { level: 2, name: 'Dose table' });
+    expect(doseHeading.compareDocumentPosition(planner) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
+    expect(within(screen.getByRole('navigation', { name: 'On this page' })).getByRole('link', { name: 'Session planner' }).getAttribute('href')).toBe('#planner');
     // The write-up's own h2 sits one level down.
     expect(screen.getByRole('heading', { level: 3, name: 'What we tested' })).toBeTruthy();
 

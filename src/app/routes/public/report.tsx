@@ -5,6 +5,7 @@ import { Spinner } from '#src/components/spinner.tsx';
 import { reportQueryOptions, useReport } from '#src/features/report/api/get-report.ts';
 import { ReportNotFound } from '#src/features/report/components/report-not-found.tsx';
 import { ReportView } from '#src/features/report/components/report-view.tsx';
+import { ReportPlanner } from '#src/app/compose/report-planner.tsx';
 import { parseVersionParam } from '#src/features/report/utils/report-urls.ts';
 import { isApiError } from '#src/lib/api-client.ts';
 
@@ -32,7 +33,7 @@ function ReportPage({ slug, version }: { slug: string; version: number | null })
     if (isApiError(report.error) && report.error.status === 404) return <ReportNotFound version={version} />;
     return <ErrorState error={report.error} onRetry={() => void report.refetch()} />;
   }
-  return <ReportView key={`${slug}/${report.data.version}`} report={report.data} />;
+  return <ReportView key={`${slug}/${report.data.version}`} report={report.data} planner={<ReportPlanner report={report.data} />} />;
 }
 
 export default function ReportRoute() {

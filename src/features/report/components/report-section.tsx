@@ -24,6 +24,7 @@ export const REPORT_SECTIONS = [
   { id: 'profile', title: 'Profile and falloff' },
   { id: 'spectrum', title: 'The spectrum' },
   { id: 'dose', title: 'Dose table' },
+  { id: 'planner', title: 'Session planner' },
   { id: 'safety', title: 'Safety and certainty' },
   { id: 'spread', title: 'Unit-to-unit spread' },
   { id: 'history', title: 'History and data' },

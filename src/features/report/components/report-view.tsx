@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import type { PublicReport } from '#shared/schemas/reports.ts';
 import { ClaimsSection } from './claims-section.tsx';
 import { CoverageSection } from './coverage-section.tsx';
@@ -14,11 +15,15 @@ import { WriteUp } from './write-up.tsx';
 
 /**
  * One published version of a report, whole: the public page and the staff preview both draw
- * exactly this (a preview says so in a banner, from `report.preview`).
+ * exactly this (a preview says so in a banner, from `report.preview`). `planner` is the session
+ * planner, composed by the page (another feature), drawn after the dose table.
  */
-export function ReportView({ report }: { report: PublicReport }) {
+export function ReportView({ report, planner }: { report: PublicReport; planner?: ReactNode }) {
   const ids = REPORT_SECTIONS.map((s) => s.id).filter(
-    (id) => (id !== 'write-up' || report.bodyHtml.trim() !== '') && (id !== 'spread' || (report.unitSpread?.length ?? 0) > 0),
+    (id) =>
+      (id !== 'write-up' || report.bodyHtml.trim() !== '') &&
+      (id !== 'spread' || (report.unitSpread?.length ?? 0) > 0) &&
+      (id !== 'planner' || Boolean(planner)),
   );
   return (
     <article className="space-y-10" data-report-version={report.version}>
@@ -31,6 +36,11 @@ export function ReportView({ report }: { report: PublicReport }) {
       <ProfileSection report={report} />
       <SpectrumSection report={report} />
       <DoseSection report={report} />
+      {planner ? (
+        <div id="planner" className="scroll-mt-6 border-t border-rule pt-8">
+          {planner}
+        </div>
+      ) : null}
       <SafetySection report={report} />
       <UnitSpreadSection report={report} />
       <HistorySection report={report} />
