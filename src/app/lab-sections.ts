@@ -26,6 +26,9 @@ export const LAB_SECTIONS: readonly LabSection[] = [
   { path: 'catalog', label: 'Catalog', capability: 'catalog.manage', action: 'manage the catalog', inNav: true, load: () => import('./routes/lab/catalog.tsx') },
   { path: 'reports/:id/preview', label: 'Report preview', capability: 'reports.publish', action: 'preview reports', inNav: false, load: () => import('./routes/lab/report-preview.tsx') },
   { path: 'review', label: 'Review', capability: 'runs.review', action: 'review runs', inNav: true, load: () => import('./routes/lab/review.tsx') },
+  { path: 'reports', label: 'Reports', capability: 'lab.enter', action: 'see reports', inNav: true, load: () => import('./routes/lab/reports.tsx') },
+  { path: 'reports/new', label: 'New report', capability: 'reports.publish', action: 'make reports', inNav: false, load: () => import('./routes/lab/report-new.tsx') },
+  { path: 'reports/:reportId', label: 'Report', capability: 'lab.enter', action: 'see reports', inNav: false, load: () => import('./routes/lab/report.tsx') },
   { path: 'admin/users', label: 'Users', capability: 'users.manage', action: 'manage users', inNav: true, load: () => import('./routes/lab/users.tsx') },
 ];
 

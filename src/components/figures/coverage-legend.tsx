@@ -9,15 +9,23 @@ export const ISOLINE_DASH: Record<number, string | undefined> = { 80: undefined,
 
 const LEGEND_TICKS = [0, 25, 50, 80, 100];
 
-/** The colour scale (0 to the plane's peak) and the key to the isoline patterns and dots. */
-export function CoverageLegend({ peak }: { peak: number }) {
+/**
+ * The colour scale (0 to the plane's peak, or to `scaleMax` when several maps share one scale)
+ * and the key to the isoline patterns and dots.
+ */
+export function CoverageLegend({ peak, scaleMax }: { peak: number; scaleMax?: number }) {
+  const top = scaleMax ?? peak;
   const gradientId = `g${useId().replace(/:/g, '')}`;
   const width = 300;
   const pad = 18; // room for the end labels
   return (
     <div className="flex flex-wrap items-start gap-x-10 gap-y-4 font-sans text-xs text-ink-soft">
       <div>
-        <p className="mb-1 font-semibold text-ink">Irradiance, % of this plane's peak ({formatFigure(peak)} mW/cm²)</p>
+        <p className="mb-1 font-semibold text-ink">
+          {scaleMax === undefined
+            ? `Irradiance, % of this plane's peak (${formatFigure(peak)} mW/cm²)`
+            : `Irradiance, mW/cm² (one scale for the maps shown together: 0 to ${formatFigure(scaleMax)})`}
+        </p>
         <svg width={width + 2 * pad} height={40} aria-hidden="true" fontFamily="Inter, system-ui, sans-serif">
           <defs>
             <linearGradient id={gradientId}>
@@ -31,13 +39,13 @@ export function CoverageLegend({ peak }: { peak: number }) {
             <g key={t}>
               <line x1={pad + (t / 100) * width} x2={pad + (t / 100) * width} y1={16} y2={21} stroke={DATA_COLORS.inkMuted} />
               <text x={pad + (t / 100) * width} y={33} textAnchor="middle" fontSize={11} fill={DATA_COLORS.ink}>
-                {t} %
+                {scaleMax === undefined ? `${t} %` : formatFigure((t / 100) * top)}
               </text>
             </g>
           ))}
         </svg>
         <p className="sr-only">
-          Pale cells are dim, dark cells bright: from 0 to {formatFigure(peak)} mW/cm².
+          Pale cells are dim, dark cells bright: from 0 to {formatFigure(top)} mW/cm².
         </p>
       </div>
       <ul className="space-y-1" aria-label="Key to the map's lines and dots">

@@ -3,7 +3,7 @@ import type { GridPlane } from '#shared/measurement/check/analyze-grid.ts';
 import { coverageMap } from '#shared/measurement/plane/coverage-map.ts';
 import { DATA_COLORS } from './data-colors.ts';
 import { formatFigure, formatLength } from '#src/lib/format.ts';
-import { cellPaths, mapFrame, niceTicks, placeLabel, polygonsPath, type LabelBox } from './map-geometry.ts';
+import { cellPaths, mapFrame, niceTicks, placeLabel, polygonsPath, type BoundsCm, type LabelBox } from './map-geometry.ts';
 import { CoverageLegend, ISOLINE_DASH } from './coverage-legend.tsx';
 
 /** Most cells the drawn map gets per axis: enough to read, few enough for SVG to stay quick. */
@@ -17,22 +17,59 @@ function drawnMap(plane: GridPlane) {
   return coverageMap(plane.coverage.field, { stepCm: Math.max(0.5, extent / MAX_DRAWN_CELLS) });
 }
 
+export interface CoverageMapFigureProps {
+  plane: GridPlane;
+  /**
+   * Top of the colour scale, mW/cm² (default: this plane's own peak). Maps drawn side by side get
+   * one value, the largest of their peaks, so the same colour means the same irradiance in each.
+   */
+  scaleMax?: number;
+  /**
+   * The area the map frames, cm (default: the measured area). Maps side by side get one extent,
+   * so a centimetre is as long in each; cells are still drawn only where there are readings.
+   */
+  extentCm?: BoundsCm;
+  /** The colour legend and line key below the map (default shown); hidden where one shared legend serves several maps. */
+  legend?: boolean;
+  /** Names the map in its title (default "Coverage map at 30 cm"). */
+  title?: string;
+}
+
+/** The frame of a map: the measured area, widened to `extent` when one is given. */
+function frameBounds(bounds: BoundsCm, extent: BoundsCm | undefined): BoundsCm {
+  if (!extent) return bounds;
+  return {
+    minXCm: Math.min(bounds.minXCm, extent.minXCm),
+    maxXCm: Math.max(bounds.maxXCm, extent.maxXCm),
+    minYCm: Math.min(bounds.minYCm, extent.minYCm),
+    maxYCm: Math.max(bounds.maxYCm, extent.maxYCm),
+  };
+}
+
 /**
  * The coverage map of one plane as SVG: interpolated irradiance as coloured cells, the 80/50/25 %
  * isolines outlined and labelled, the measured points as dots, cm axes. The same numbers are in
  * the tables beside it, so the picture is never the only way to read them.
  */
-export function CoverageMapFigure({ plane }: { plane: GridPlane }) {
+export function CoverageMapFigure({ plane, scaleMax, extentCm, legend = true, title }: CoverageMapFigureProps) {
   const titleId = useId();
   const descId = useId();
   const { coverage, points, distanceCm } = plane;
   const bounds = coverage.field.bounds;
   const peak = coverage.peak;
   const drawn = useMemo(() => drawnMap(plane), [plane]);
+  // A shared scale below this plane's peak would saturate its brightest cells: never go under it.
+  const scaleTop = scaleMax !== undefined && peak !== null && scaleMax > 0 ? Math.max(scaleMax, peak) : peak;
+  const eMinX = extentCm?.minXCm;
+  const eMaxX = extentCm?.maxXCm;
+  const eMinY = extentCm?.minYCm;
+  const eMaxY = extentCm?.maxYCm;
 
   const drawing = useMemo(() => {
-    if (!bounds || !drawn || peak === null || bounds.maxXCm <= bounds.minXCm || bounds.maxYCm <= bounds.minYCm) return null;
-    const frame = mapFrame(bounds);
+    if (!bounds || !drawn || peak === null || scaleTop === null || bounds.maxXCm <= bounds.minXCm || bounds.maxYCm <= bounds.minYCm) return null;
+    const extent = eMinX === undefined || eMaxX === undefined || eMinY === undefined || eMaxY === undefined ? undefined : { minXCm: eMinX, maxXCm: eMaxX, minYCm: eMinY, maxYCm: eMaxY };
+    const framed = frameBounds(bounds, extent);
+    const frame = mapFrame(framed);
     const taken: LabelBox[] = [];
     const lines = coverage.isolines.map((iso) => ({
       iso,
@@ -41,14 +78,14 @@ export function CoverageMapFigure({ plane }: { plane: GridPlane }) {
     }));
     return {
       frame,
-      cells: cellPaths(drawn, peak, frame),
+      cells: cellPaths(drawn, scaleTop, frame),
       lines,
-      xTicks: niceTicks(bounds.minXCm, bounds.maxXCm),
-      yTicks: niceTicks(bounds.minYCm, bounds.maxYCm, 6),
+      xTicks: niceTicks(framed.minXCm, framed.maxXCm),
+      yTicks: niceTicks(framed.minYCm, framed.maxYCm, 6),
     };
-  }, [bounds, drawn, peak, coverage.isolines]);
+  }, [bounds, drawn, peak, scaleTop, coverage.isolines, eMinX, eMaxX, eMinY, eMaxY]);
 
-  if (!drawing || !bounds || peak === null) {
+  if (!drawing || !bounds || peak === null || scaleTop === null) {
     return (
       <p className="font-sans text-sm text-ink-soft">
         The readings at {formatLength(distanceCm)} cm lie on one line or one point, so there is no area to map. The
@@ -59,6 +96,8 @@ export function CoverageMapFigure({ plane }: { plane: GridPlane }) {
 
   const { frame, cells, lines, xTicks, yTicks } = drawing;
   const { plot } = frame;
+  const name = title ?? `Coverage map at ${formatLength(distanceCm)} cm`;
+  const shared = scaleMax !== undefined;
   const areas = coverage.isolines
     .filter((iso) => iso.levelPct !== null)
     .map((iso) => `${iso.levelPct} %: ${formatFigure(iso.areaCm2)} cm²`)
@@ -69,7 +108,7 @@ export function CoverageMapFigure({ plane }: { plane: GridPlane }) {
       {/* Scrolls sideways on a phone rather than shrinking the labels past reading. */}
       <div
         role="region"
-        aria-label={`Coverage map at ${formatLength(distanceCm)} cm, scrollable`}
+        aria-label={`${name}, scrollable`}
         tabIndex={0}
         className="overflow-x-auto"
         data-chart="coverage-map"
@@ -82,11 +121,12 @@ export function CoverageMapFigure({ plane }: { plane: GridPlane }) {
           style={{ maxWidth: `${Math.ceil(frame.width)}px` }}
           fontFamily="Inter, system-ui, sans-serif"
         >
-          <title id={titleId}>Coverage map at {formatLength(distanceCm)} cm</title>
+          <title id={titleId}>{name}</title>
           <desc id={descId}>
             Interpolated irradiance over x {formatLength(bounds.minXCm)} to {formatLength(bounds.maxXCm)} cm and y{' '}
             {formatLength(bounds.minYCm)} to {formatLength(bounds.maxYCm)} cm; peak {formatFigure(peak)} mW/cm². Area at
             or above each share of the peak: {areas}. Dots mark the {points.length} measured points.
+            {shared ? ` Colours run from 0 to ${formatFigure(scaleTop)} mW/cm², a scale shared with the maps beside it.` : ''}
           </desc>
           <g shapeRendering="crispEdges">
             {cells.map((c) => (
@@ -170,7 +210,7 @@ export function CoverageMapFigure({ plane }: { plane: GridPlane }) {
           </text>
         </svg>
       </div>
-      <CoverageLegend peak={peak} />
+      {legend ? <CoverageLegend peak={peak} scaleMax={shared ? scaleTop : undefined} /> : null}
       <figcaption className="font-sans text-xs text-ink-soft">
         Irradiance interpolated between the measured points (nothing beyond them), seen facing the emitting surface:
         x across, y up, origin at the centre of the emitting area.

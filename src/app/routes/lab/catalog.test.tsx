@@ -41,14 +41,15 @@ describe('catalogue page: the list state lives in the URL', () => {
     expect(new URLSearchParams(router.state.location.search).get('dir')).toBe('desc');
     expect(new URLSearchParams(router.state.location.search).get('page')).toBeNull();
     await waitFor(() => expect(listCalls(calls, '/api/lab/makers').at(-1)?.query).toMatchObject({ sort: 'modelCount', dir: 'desc', page: '1' }));
-    expect(within(table).getByRole('columnheader', { name: /Models/ }).getAttribute('aria-sort')).toBe('descending');
+    // The table re-renders in a transition after the URL changes: wait for it rather than race it.
+    await waitFor(() => expect(within(table).getByRole('columnheader', { name: /Models/ }).getAttribute('aria-sort')).toBe('descending'));
 
     const modelsHeader = within(table).getByRole('button', { name: 'Models' });
     modelsHeader.focus();
     await user.keyboard('{Enter}');
     expect(new URLSearchParams(router.state.location.search).get('dir')).toBeNull(); // asc is the default
     await waitFor(() => expect(listCalls(calls, '/api/lab/makers').at(-1)?.query).toMatchObject({ sort: 'modelCount', dir: 'asc' }));
-    expect(within(table).getByRole('columnheader', { name: /Models/ }).getAttribute('aria-sort')).toBe('ascending');
+    await waitFor(() => expect(within(table).getByRole('columnheader', { name: /Models/ }).getAttribute('aria-sort')).toBe('ascending'));
   });
 
   it('pages forward, and the back button brings the previous page back', async () => {

@@ -14,16 +14,16 @@ async function labNavItems(user: SessionUser) {
 }
 
 describe('lab shell', () => {
-  it('shows a tester Overview, Runs, File check and Catalog', async () => {
-    expect(await labNavItems(people.tester)).toEqual(['Overview', 'Runs', 'File check', 'Catalog']);
+  it('shows a tester Overview, Runs, File check, Catalog and Reports', async () => {
+    expect(await labNavItems(people.tester)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Reports']);
   });
 
   it('shows an editor Review as well', async () => {
-    expect(await labNavItems(people.editor)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review']);
+    expect(await labNavItems(people.editor)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports']);
   });
 
   it('shows an admin Users as well', async () => {
-    expect(await labNavItems(people.admin)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Users']);
+    expect(await labNavItems(people.admin)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Users']);
   });
 
   it('names the signed-in user and role and offers to sign out', async () => {

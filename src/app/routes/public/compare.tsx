@@ -1,10 +1,14 @@
-import { NotYetBuilt } from '#src/components/not-yet-built.tsx';
+import { PageHeader } from '#src/components/page-header.tsx';
+import { CompareView } from '#src/features/public-reports/components/compare-view.tsx';
 
 export default function CompareRoute() {
   return (
-    <NotYetBuilt
-      title="Compare"
-      willHold="published units side by side: irradiance per band at each distance, coverage, uniformity, falloff and the session time to reach a chosen dose."
-    />
+    <>
+      <PageHeader
+        title="Compare"
+        description="Published units side by side, on the same scales: their lateral profiles on one chart, their coverage maps on one colour scale, and their key figures in one table."
+      />
+      <CompareView />
+    </>
   );
 }

@@ -1,6 +1,14 @@
+import type { QueryClient } from '@tanstack/react-query';
 import { PageHeader } from '#src/components/page-header.tsx';
+import { publicReportsQueryOptions } from '#src/features/public-reports/api/get-public-reports.ts';
+import { LatestReports } from '#src/features/public-reports/components/latest-reports.tsx';
+import { MeasurementsNote } from '#src/features/public-reports/components/measurements-note.tsx';
 import { LabStatement } from '#src/features/public-site/components/lab-statement.tsx';
-import { LatestReports } from '#src/features/public-site/components/latest-reports.tsx';
+
+export const clientLoader = (queryClient: QueryClient) => async () => {
+  void queryClient.prefetchQuery(publicReportsQueryOptions());
+  return null;
+};
 
 export default function HomeRoute() {
   return (
@@ -13,6 +21,7 @@ export default function HomeRoute() {
       <div className="space-y-section">
         <LabStatement />
         <LatestReports />
+        <MeasurementsNote />
       </div>
     </>
   );

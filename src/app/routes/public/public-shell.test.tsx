@@ -5,7 +5,7 @@ import { stubFetch } from '#src/test/fetch-stub.ts';
 
 describe('public shell', () => {
   it('shows the main navigation, the staff link and the home page', async () => {
-    stubFetch({});
+    stubFetch({ 'GET /api/public/reports': { body: { reports: [] } } });
     renderApp('/');
     const nav = await screen.findByRole('navigation', { name: 'Main' });
     const labels = within(nav)
@@ -21,13 +21,13 @@ describe('public shell', () => {
     expect(screen.getByRole('link', { name: 'Benchlight' }).getAttribute('href')).toBe('/');
     expect(screen.getByRole('link', { name: 'Staff sign-in' }).getAttribute('href')).toBe('/lab');
     expect(screen.getByRole('heading', { level: 1 })).toBeTruthy();
-    expect(screen.getByText('No reports published yet')).toBeTruthy();
+    expect(await screen.findByText('No reports published yet')).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Skip to main content' }).getAttribute('href')).toBe('#main');
     expect(screen.getByRole('main').id).toBe('main');
   });
 
   it('carries every caution and "measurements, not medical advice" in the footer', async () => {
-    stubFetch({});
+    stubFetch({ 'GET /api/public/reports': { body: { reports: [] } } });
     renderApp('/');
     const footer = await screen.findByRole('contentinfo');
     const text = footer.textContent ?? '';
@@ -48,10 +48,10 @@ describe('public shell', () => {
 
   it('says plainly that an unbuilt page is not built yet', async () => {
     stubFetch({});
-    renderApp('/compare');
-    expect((await screen.findByRole('heading', { level: 1 })).textContent).toBe('Compare');
+    renderApp('/request');
+    expect((await screen.findByRole('heading', { level: 1 })).textContent).toBe('Request a test');
     expect(screen.getByText('This page is not built yet.')).toBeTruthy();
-    const current = within(screen.getByRole('navigation', { name: 'Main' })).getByRole('link', { name: 'Compare' });
+    const current = within(screen.getByRole('navigation', { name: 'Main' })).getByRole('link', { name: 'Request a test' });
     expect(current.getAttribute('aria-current')).toBe('page');
   });
 

@@ -5,7 +5,9 @@ export function PublicFooter() {
   return (
     <footer className="mt-section border-t border-rule bg-paper-sunk">
       <div className="mx-auto max-w-page space-y-6 px-gutter py-8">
-        <Cautions title="Cautions for anyone using these devices" />
+        <div id="site-cautions" tabIndex={-1}>
+          <Cautions title="Cautions for anyone using these devices" />
+        </div>
         <p className="max-w-measure text-sm text-ink-soft">
           Benchlight publishes measurements, not medical advice.
         </p>
