@@ -5,6 +5,7 @@
  * screening, and for a report over several units the unit-to-unit spread. Pure and deterministic,
  * so a preview and the published version are the same numbers.
  */
+import { minorDigits } from '../money/money.ts';
 import { analyzeGrid } from '../measurement/check/analyze-grid.ts';
 import { fitEffectiveBeamAngle, type BeamAngleFit } from '../measurement/distance/beam-angle.ts';
 import { centerAtDistance, pointFalloffExponentAt, pointFalloffExponents } from '../measurement/distance/falloff.ts';
@@ -277,7 +278,7 @@ export function buildReportSnapshot(model: SnapshotModel, runs: readonly Snapsho
     spread50CmAt15: figures.planes.find((p) => near(p.distanceCm, 15))?.bands[COMBINED_BAND]?.spreadWidthCm['50'] ?? null,
     footprintUniformity: nearest?.bands[COMBINED_BAND]?.footprintArea?.minOverMean ?? null,
     measuredOverClaimed: claims.ratio,
-    pricePer100Cm2At30: price && area50At30 && area50At30 > 0 ? price.amountMinor / 100 / (area50At30 / 100) : null,
+    pricePer100Cm2At30: price && area50At30 && area50At30 > 0 ? price.amountMinor / 10 ** minorDigits(price.currency) / (area50At30 / 100) : null,
     currency: price?.currency ?? null,
   };
 

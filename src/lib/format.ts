@@ -2,7 +2,7 @@
  * Every number, date and unit the pages print goes through here. Unit conversions come from
  * shared/measurement/units.ts (re-exported for the pages), so a figure is converted one way only.
  */
-import { minorToMajor } from './money.ts';
+import { minorToMajor } from '#shared/money/money.ts';
 
 export { wm2ToMwCm2 } from '#shared/measurement/units.ts';
 

@@ -1,9 +1,9 @@
 import { useTable, type RowData } from '@tanstack/react-table';
 import { useId, useMemo, type ReactNode } from 'react';
 import type { ListPage } from '#shared/schemas/list-query.ts';
-import { cn } from '../../lib/cn.ts';
-import { formatCount } from '../../lib/format.ts';
-import { isNarrowed, type ListQueryBase, type ListSearch } from '../../lib/list-search-params.ts';
+import { cn } from '#src/lib/cn.ts';
+import { formatCount } from '#src/lib/format.ts';
+import { isNarrowed, type ListQueryBase, type ListSearch } from '#src/lib/list-search-params.ts';
 import { Button } from '../button.tsx';
 import { ErrorState } from '../error-state.tsx';
 import { Spinner } from '../spinner.tsx';

@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import { formatCount } from '../../lib/format.ts';
+import { formatCount } from '#src/lib/format.ts';
 import { Button } from '../button.tsx';
 import { Select } from '../select-field.tsx';
 

@@ -1,5 +1,5 @@
 import { useEffect, useId, useRef, useState } from 'react';
-import { cn } from '../../lib/cn.ts';
+import { cn } from '#src/lib/cn.ts';
 import { Button } from '../button.tsx';
 import { controlClasses } from '../field.tsx';
 

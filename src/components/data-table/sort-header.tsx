@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
-import type { SortDir } from '../../lib/list-search-params.ts';
-import { cn } from '../../lib/cn.ts';
+import type { SortDir } from '#src/lib/list-search-params.ts';
+import { cn } from '#src/lib/cn.ts';
 
 /**
  * A column header that sorts on the server: a real button (Enter and Space work), the sort in

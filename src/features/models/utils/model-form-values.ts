@@ -1,6 +1,6 @@
 import { modelBodySchema, type Model, type ModelBody, type ModelCategory } from '#shared/schemas/models.ts';
 import { type AddFieldIssue, formSchema, numberOrNull, numberText, textOrNull } from '#src/lib/form-schema.ts';
-import { majorToMinor, minorToMajor } from '#src/lib/money.ts';
+import { majorToMinor, minorToMajor } from '#shared/money/money.ts';
 
 /** The model form as typed: numbers and the price are text until the form is sent. */
 export interface ModelFormValues {

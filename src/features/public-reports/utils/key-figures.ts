@@ -1,7 +1,7 @@
 import type { KeyFigures } from '#shared/schemas/reports.ts';
 import type { DisplayUnits } from '#src/lib/display-units.tsx';
 import { formatFigure, formatLength, formatMoney } from '#src/lib/format.ts';
-import { minorDigits } from '#src/lib/money.ts';
+import { minorDigits } from '#shared/money/money.ts';
 
 /** What the reader's unit choice gives these helpers (useDisplayUnits() fits). */
 export interface FigureUnits extends DisplayUnits {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatMoney } from './format.ts';
+import { formatMoney } from '#src/lib/format.ts';
 import { majorToMinor, minorDigits, minorToMajor } from './money.ts';
 
 // Minor-unit digits per currency: ISO 4217 (EUR 2, JPY 0, KWD 3), as Intl reports them.
