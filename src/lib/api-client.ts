@@ -92,6 +92,9 @@ export async function apiRequest<T = void>(path: string, options: RequestOptions
       headers,
       body: body === undefined ? undefined : JSON.stringify(body),
       credentials: 'same-origin',
+      // The app keeps its own cache (TanStack Query): the browser revalidates every answer (a cheap
+      // 304 when nothing changed), so a correction shows at once; max-age is for shared caches.
+      cache: 'no-cache',
       signal,
     });
   } catch (cause) {

@@ -52,7 +52,7 @@ describe('reports: publication, versions, retraction, and what the public may se
     expect(created.status).toBe(201);
     expect(created.body.report).toMatchObject({ status: 'draft', version: 0 });
     const { id, slug } = created.body.report;
-    for (const path of [`/api/public/reports/${slug}`, `/api/public/reports/${slug}/versions/1`, `/api/public/reports/${slug}/readings.csv`, `/api/public/reports/${slug}/figures.json`]) {
+    for (const path of [`/api/public/reports/${slug}`, `/api/public/reports/${slug}/versions/1`, `/api/public/reports/${slug}/readings.csv`, `/api/public/reports/${slug}/figures.json`, `/api/public/reports/${slug}/versions/1/figures.json`, `/api/public/reports/${slug}/versions/1/readings.csv`]) {
       expect((await t.api().get(path)).status, path).toBe(404);
     }
     expect((await t.api().get('/api/public/reports')).body.reports).toEqual([]);
@@ -158,6 +158,9 @@ describe('reports: publication, versions, retraction, and what the public may se
     const figures = await t.api().get(`/api/public/reports/${slug}/figures.json`);
     expect(figures.body.units.irradiance).toMatch(/mW\/cm²/);
     expect(figures.body.citation).toContain(`/reports/${slug}/versions/2`);
+    const v1Figures = await t.api().get(`/api/public/reports/${slug}/versions/1/figures.json`);
+    expect(v1Figures.body.report.version).toBe(1);
+    expect(v1Figures.body.citation).toContain(`/reports/${slug}/versions/1`);
     expect((await t.api().get('/sitemap.xml')).text).toContain(`/reports/${slug}</loc>`);
   });
 

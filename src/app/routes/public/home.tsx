@@ -19,8 +19,8 @@ export default function HomeRoute() {
         description="What red and near-infrared panels really deliver: across their face, and at the distances people use them."
       />
       <div className="space-y-section">
-        <LabStatement />
         <LatestReports />
+        <LabStatement />
         <MeasurementsNote />
       </div>
     </>

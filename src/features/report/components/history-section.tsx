@@ -90,10 +90,10 @@ export function HistorySection({ report }: { report: PublicReport }) {
                   </>
                 ) : (
                   <li>
-                    <a href={figuresJsonUrl(report.slug)} download>
-                      Figures of the latest version (JSON)
+                    <a href={figuresJsonUrl(report.slug, report.version)} download>
+                      Figures of version {report.version} (JSON)
                     </a>{' '}
-                    <span className="text-ink-soft">— the figures file follows the latest version, {report.latestVersion}</span>
+                    <span className="text-ink-soft">— every figure on this page with its unit, and this version's citation</span>
                   </li>
                 )}
               </ul>

@@ -9,6 +9,7 @@ describe('report addresses', () => {
     expect(readingsCsvUrl('tarn-hand-panel', null)).toBe('/api/public/reports/tarn-hand-panel/readings.csv');
     expect(readingsCsvUrl('tarn-hand-panel', 1)).toBe('/api/public/reports/tarn-hand-panel/versions/1/readings.csv');
     expect(figuresJsonUrl('tarn-hand-panel')).toBe('/api/public/reports/tarn-hand-panel/figures.json');
+    expect(figuresJsonUrl('tarn-hand-panel', 1)).toBe('/api/public/reports/tarn-hand-panel/versions/1/figures.json');
   });
 
   it('reads a version number only when it is a whole number from 1', () => {

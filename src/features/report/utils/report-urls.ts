@@ -14,9 +14,10 @@ export function readingsCsvUrl(slug: string, version: number | null): string {
   return version === null ? `${base}/readings.csv` : `${base}/versions/${version}/readings.csv`;
 }
 
-/** The figures with their units and the suggested citation, latest version. */
-export function figuresJsonUrl(slug: string): string {
-  return `/api/public/reports/${enc(slug)}/figures.json`;
+/** The figures with their units and the suggested citation: the latest version's (no version) or one version's. */
+export function figuresJsonUrl(slug: string, version: number | null = null): string {
+  const base = `/api/public/reports/${enc(slug)}`;
+  return version === null ? `${base}/figures.json` : `${base}/versions/${version}/figures.json`;
 }
 
 /** A version number from the address, or null when it is not a whole number from 1 up. */
