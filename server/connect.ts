@@ -9,7 +9,7 @@ import { resolveDatabaseUrl } from './db/database-url.ts';
 import { createSessionAuth } from './auth/session-auth.ts';
 import { createSignInLimiter } from './auth/sign-in-limiter.ts';
 import { createMailer, type Mailer } from './mail/mailer.ts';
-import { systemClock, type Clock, type ServiceDeps } from './core/context.ts';
+import { systemClock, type Clock, type ServiceDeps, type SiteSettings } from './core/context.ts';
 import { createServices, type Services } from './services/index.ts';
 import { startJobQueue, type JobQueue } from './queue/job-queue.ts';
 import { createPgFileStorage } from './storage/file-storage.ts';
@@ -30,6 +30,8 @@ export interface ConnectOptions {
   signInLimits?: { perAccount: number; perIp: number; windowMinutes: number };
   /** The worker supervises the job queue (expires lost jobs); other processes only queue. */
   superviseQueue?: boolean;
+  /** E-mail links, retries and limits (defaults otherwise). */
+  site?: Partial<SiteSettings>;
 }
 
 export async function connect(options: ConnectOptions = {}): Promise<Connection> {
@@ -46,6 +48,7 @@ export async function connect(options: ConnectOptions = {}): Promise<Connection>
     logger,
     queue,
     storage: createPgFileStorage(db.knex),
+    site: options.site,
   };
   const close = async () => {
     await queue.stop();

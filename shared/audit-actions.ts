@@ -33,5 +33,17 @@ export const AUDIT_ACTIONS = [
   'report.publish',
   'report.correct',
   'report.retract',
+  'subscriber.confirm',
+  'subscriber.update',
+  'subscriber.unsubscribe',
+  'test_request.create',
+  'test_request.vote',
+  'test_request.triage',
+  'test_request.merge',
+  'invitation.create',
+  'invitation.revoke',
+  'invitation.accept',
+  'user.password_reset',
+  'mail.resend',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

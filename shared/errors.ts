@@ -15,6 +15,8 @@ export const ERROR_STATUS = {
   conflict: 409,
   email_taken: 409,
   payload_too_large: 413,
+  token_expired: 410,
+  token_used: 410,
   rate_limited: 429,
   database_unavailable: 503,
   internal: 500,

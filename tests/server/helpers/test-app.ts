@@ -5,7 +5,7 @@ import { randomUUID } from 'node:crypto';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { createApp } from '#server/app.ts';
-import { loadConfig, type Config } from '#server/config.ts';
+import { loadConfig, siteSettingsFrom, type Config } from '#server/config.ts';
 import { createDb, closeDb, type DbHandles } from '#server/db/knex.ts';
 import { createSessionAuth } from '#server/auth/session-auth.ts';
 import { systemCaller } from '#server/core/caller.ts';
@@ -25,12 +25,12 @@ import { registerJobHandlers } from '#server/job-handlers.ts';
 export async function makeTestApp(
   overrides: Partial<Record<string, string>> = {},
   databaseUrl: string = inject('databaseUrl'),
-  options: { worker?: boolean } = {},
+  options: { worker?: boolean; mailer?: Mailer } = {},
 ) {
   const config: Config = loadConfig({ NODE_ENV: 'test', LOG_LEVEL: 'silent', ...overrides });
   const db: DbHandles = createDb(databaseUrl, () => {});
   const sent: MailMessage[] = [];
-  const mailer: Mailer = { send: async (m) => void sent.push(m) };
+  const mailer: Mailer = options.mailer ?? { send: async (m) => void sent.push(m) };
   const logger = pino({ level: 'silent' });
   // The real queue in the test database: uploads queue their jobs; tests run them with runJobs().
   const queue = await startJobQueue({ databaseUrl, logger, supervise: false });
@@ -46,6 +46,7 @@ export async function makeTestApp(
     logger,
     queue,
     storage: createPgFileStorage(db.knex),
+    site: siteSettingsFrom(config),
   });
   // The worker's handlers in this process, on the same queue, for tests that need files analysed.
   if (options.worker) await registerJobHandlers(queue, services, logger);
