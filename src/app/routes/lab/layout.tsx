@@ -19,7 +19,7 @@ import { meQueryOptions, useMe } from '#src/features/auth/api/get-me.ts';
 import { useSignOut } from '#src/features/auth/api/sign-out.ts';
 import { LabHeader } from '#src/features/lab-home/components/lab-header.tsx';
 import { LabNav } from '#src/features/lab-home/components/lab-nav.tsx';
-import { useLabSettings } from '#src/features/mail/api/lab-settings.ts';
+import { labSettingsQueryOptions, useLabSettings } from '#src/features/mail/api/lab-settings.ts';
 import { labNavFor } from '#src/app/lab-sections.ts';
 import { useFocusMainOnNavigate } from '#src/hooks/use-focus-main-on-navigate.ts';
 import { isApiError } from '#src/lib/api-client.ts';
@@ -37,6 +37,8 @@ export const clientLoader =
       const url = new URL(request.url);
       throw redirect(signInPath(url.pathname, url.search));
     }
+    // The navigation depends on it (the Mailbox); without it the lab still works.
+    await queryClient.ensureQueryData(labSettingsQueryOptions()).catch(() => null);
     return null;
   };
 
