@@ -37,8 +37,10 @@ export const clientLoader =
       const url = new URL(request.url);
       throw redirect(signInPath(url.pathname, url.search));
     }
-    // The navigation depends on it (the Mailbox); without it the lab still works.
-    await queryClient.ensureQueryData(labSettingsQueryOptions()).catch(() => null);
+    // The navigation depends on it (the Mailbox): fetched once before the first render, not
+    // on every navigation; without it the lab still works.
+    const settings = labSettingsQueryOptions();
+    if (!queryClient.getQueryState(settings.queryKey)) await queryClient.ensureQueryData(settings).catch(() => null);
     return null;
   };
 
