@@ -4,7 +4,7 @@ import { randomUUID } from 'node:crypto';
 import express, { type Express } from 'express';
 import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
-import type { Config } from './config.ts';
+import { siteSettingsFrom, type Config } from './config.ts';
 import type { DbHandles } from './db/knex.ts';
 import type { Mailer } from './mail/mailer.ts';
 import type { JobQueue } from './queue/job-queue.ts';
@@ -30,6 +30,10 @@ import { reportsRoutes } from './routes/reports-routes.ts';
 import { publicRoutes } from './routes/public-routes.ts';
 import { siteRoutes } from './routes/site-routes.ts';
 import { paymentsWebhookRoutes } from './routes/payments-routes.ts';
+import { oneClickUnsubscribeRoutes, subscriptionsRoutes } from './routes/subscriptions-routes.ts';
+import { testRequestsRoutes } from './routes/test-requests-routes.ts';
+import { staffAccessRoutes } from './routes/staff-access-routes.ts';
+import { mailRoutes } from './routes/mail-routes.ts';
 import { withPageMeta } from './http/index-html.ts';
 import { publicBaseUrl } from './http/public-url.ts';
 
@@ -75,6 +79,7 @@ export function createApp(deps: AppDeps): Express {
     queue: deps.queue,
     storage: deps.storage ?? createPgFileStorage(db.knex),
     payments: deps.payments ?? createPaymentProvider(config),
+    site: siteSettingsFrom(config),
   };
   const services = createServices(serviceDeps, { paymentEventHandlers: deps.paymentEventHandlers });
 
@@ -90,6 +95,14 @@ export function createApp(deps: AppDeps): Express {
         return id;
       },
       autoLogging: { ignore: (req) => req.url === '/api/health' },
+      // E-mailed links carry bearer tokens in their query (one-click unsubscribe): keep them out of logs.
+      serializers: {
+        req: (req: { url?: string; query?: Record<string, unknown> }) => ({
+          ...req,
+          url: req.url?.replace(/([?&]token=)[^&]*/g, '$1[redacted]'),
+          ...(req.query && 'token' in req.query ? { query: { ...req.query, token: '[redacted]' } } : {}),
+        }),
+      },
     }),
   );
   app.use(securityHeaders);
@@ -101,6 +114,9 @@ export function createApp(deps: AppDeps): Express {
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
   api.use(sessionMiddleware(sessions));
+  // RFC 8058 one-click unsubscribe comes from mail providers' servers, without an Origin: the
+  // token is its authority. Every other state-changing request passes the Origin check below.
+  api.use(oneClickUnsubscribeRoutes(services));
   api.use(originCheck(config.ALLOWED_ORIGINS.split(',').map((s) => s.trim()).filter(Boolean)));
   api.use(healthRoutes(() => pingDatabase(db.knex)));
   api.use(authRoutes(services.auth));
@@ -109,6 +125,10 @@ export function createApp(deps: AppDeps): Express {
   api.use(runsRoutes(services));
   api.use(reportsRoutes(services));
   api.use(publicRoutes(services, { publicBaseUrl: config.PUBLIC_BASE_URL }));
+  api.use(subscriptionsRoutes(services));
+  api.use(testRequestsRoutes(services));
+  api.use(staffAccessRoutes(services));
+  api.use(mailRoutes(services));
   api.use(apiNotFound);
   app.use('/api', api);
   app.use(siteRoutes(services, { publicBaseUrl: config.PUBLIC_BASE_URL }));

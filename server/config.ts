@@ -32,6 +32,17 @@ export const configSchema = z.object({
   /** SMTP server for outgoing e-mail; without it, mail is written to the log. */
   SMTP_URL: z.string().url().optional(),
   MAIL_FROM: z.string().default('Benchlight <no-reply@benchlight.invalid>'),
+  /**
+   * Folder where the local fake SMTP server writes what it receives (set by npm run demo and the
+   * browser tests, beside SMTP_URL pointing at the fake). When set, admins get the Mailbox page.
+   */
+  FAKE_MAILBOX_DIR: z.string().min(1).optional(),
+  /** First retry of a message the SMTP server did not take, s; each further retry waits twice as long. */
+  MAIL_RETRY_SECONDS: z.coerce.number().min(0.1).max(3600).default(30),
+  /** Readers' forms that send e-mail (subscribe, vote, request a test, password reset): per client IP per hour. */
+  READER_MAX_PER_IP: z.coerce.number().int().min(1).max(100000).default(30),
+  /** The same, per e-mail address per hour; past it the answer stays the same and nothing is sent. */
+  READER_MAX_PER_ADDRESS: z.coerce.number().int().min(1).max(1000).default(5),
   /** The site's public address (https://…), for citations, the feed, the sitemap and e-mail links; else taken from each request. */
   PUBLIC_BASE_URL: z.string().url().optional(),
   /** The payment provider's secret API key (sk_…); payments answer 503 without it outside production. */
@@ -72,4 +83,22 @@ function productionProblems(c: z.infer<typeof configSchema>): string[] {
     problems.push('PAYMENTS_API_URL: must be unset or https:// in production (the local fake never runs there)');
   }
   return problems;
+}
+
+/** Where e-mailed links point: PUBLIC_BASE_URL, or this server's own address (development, demo). */
+export function mailBaseUrl(config: Pick<Config, 'PUBLIC_BASE_URL' | 'HOST' | 'PORT'>): string {
+  if (config.PUBLIC_BASE_URL) return config.PUBLIC_BASE_URL.replace(/\/+$/, '');
+  const host = config.HOST === '0.0.0.0' || config.HOST === '::' ? '127.0.0.1' : config.HOST;
+  return `http://${host}:${config.PORT}`;
+}
+
+/** The settings services read from the configuration (see SiteSettings). */
+export function siteSettingsFrom(config: Config) {
+  return {
+    publicBaseUrl: mailBaseUrl(config),
+    mailRetrySeconds: config.MAIL_RETRY_SECONDS,
+    readerMaxPerIp: config.READER_MAX_PER_IP,
+    readerMaxPerAddress: config.READER_MAX_PER_ADDRESS,
+    fakeMailboxDir: config.FAKE_MAILBOX_DIR ?? null,
+  };
 }

@@ -9,7 +9,7 @@ import { resolveDatabaseUrl } from './db/database-url.ts';
 import { createSessionAuth } from './auth/session-auth.ts';
 import { createSignInLimiter } from './auth/sign-in-limiter.ts';
 import { createMailer, type Mailer } from './mail/mailer.ts';
-import { systemClock, type Clock, type ServiceDeps } from './core/context.ts';
+import { systemClock, type Clock, type ServiceDeps, type SiteSettings } from './core/context.ts';
 import { createServices, type Services } from './services/index.ts';
 import { startJobQueue, type JobQueue } from './queue/job-queue.ts';
 import { createPgFileStorage } from './storage/file-storage.ts';
@@ -37,6 +37,8 @@ export interface ConnectOptions {
    * answer 503: the seed and user:create need none, and must not require payment keys to run.
    */
   payments?: PaymentProvider;
+  /** E-mail links, retries and limits (defaults otherwise). */
+  site?: Partial<SiteSettings>;
 }
 
 export async function connect(options: ConnectOptions = {}): Promise<Connection> {
@@ -54,6 +56,7 @@ export async function connect(options: ConnectOptions = {}): Promise<Connection>
     queue,
     storage: createPgFileStorage(db.knex),
     payments: options.payments ?? createUnconfiguredPaymentProvider(),
+    site: options.site,
   };
   const close = async () => {
     await queue.stop();

@@ -15,4 +15,24 @@ export async function registerJobHandlers(queue: JobQueue, services: Services, l
     const outcome = await services.runProcessing.analyzeRun(worker, runId);
     logger.debug({ runId, outcome, ms: Date.now() - started }, 'run analysis');
   });
+  // One delivery attempt per job; the outbox row says whether there is anything left to do.
+  await queue.work('send-mail', { batchSize: 10, pollingIntervalSeconds: 0.5, concurrency: 4 }, async ({ outboxId }) => {
+    const outcome = await services.outbox.deliver(worker, outboxId);
+    logger.debug({ outboxId, outcome }, 'mail delivery');
+  });
+}
+
+/**
+ * The outbox's housekeeping, every minute in the worker: messages left "sending" by a worker
+ * that died become failed (never resent by themselves), lost jobs of queued ones are replaced.
+ * Returns a function that stops it.
+ */
+export function startOutboxSweep(services: Services, logger: Logger, intervalMs = 60_000): () => void {
+  const worker = systemCaller('worker');
+  const run = () =>
+    services.outbox.sweep(worker).catch((err: unknown) => logger.warn({ err: err instanceof Error ? err.message : String(err) }, 'outbox sweep failed; next minute again'));
+  void run();
+  const timer = setInterval(run, intervalMs);
+  timer.unref();
+  return () => clearInterval(timer);
 }

@@ -1,14 +1,16 @@
 /**
  * The worker process (npm run worker): runs the jobs the web processes queue — each uploaded
- * file's analysis and each run's figures. Several workers may run against one database; the
- * queue hands each job to one of them, and a job lost with a worker is retried after it expires.
+ * file's analysis, each run's figures and every e-mail of the outbox. Several workers may run
+ * against one database; the queue hands each job to one of them, and a job lost with a worker is
+ * retried after it expires.
  */
-import { loadConfig } from './config.ts';
+import { loadConfig, siteSettingsFrom } from './config.ts';
 import { connect } from './connect.ts';
 import { resolveDatabaseUrl } from './db/database-url.ts';
 import { createLogger } from './logger.ts';
-import { registerJobHandlers } from './job-handlers.ts';
 import { createPaymentProvider } from './payments/create-payment-provider.ts';
+import { registerJobHandlers, startOutboxSweep } from './job-handlers.ts';
+import { createMailer } from './mail/mailer.ts';
 
 const config = loadConfig();
 const logger = createLogger(config.LOG_LEVEL);
@@ -17,8 +19,12 @@ const app = await connect({
   logger,
   superviseQueue: true,
   payments: createPaymentProvider(config),
+  // The worker is what sends e-mail: it needs the SMTP server and where links point.
+  mailer: createMailer({ smtpUrl: config.SMTP_URL, from: config.MAIL_FROM, logger }),
+  site: siteSettingsFrom(config),
 });
 await registerJobHandlers(app.queue, app.services, logger);
+const stopSweep = startOutboxSweep(app.services, logger);
 logger.info('worker started');
 console.log('Benchlight worker is running.');
 
@@ -28,6 +34,7 @@ async function shutdown(signal: string) {
   stopping = true;
   logger.info({ signal }, 'worker stopping');
   setTimeout(() => process.exit(0), 8000).unref();
+  stopSweep();
   await app.close();
   process.exit(0);
 }

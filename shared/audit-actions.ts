@@ -34,5 +34,17 @@ export const AUDIT_ACTIONS = [
   'report.correct',
   'report.retract',
   'payment_event.receive',
+  'subscriber.confirm',
+  'subscriber.update',
+  'subscriber.unsubscribe',
+  'test_request.create',
+  'test_request.vote',
+  'test_request.triage',
+  'test_request.merge',
+  'invitation.create',
+  'invitation.revoke',
+  'invitation.accept',
+  'user.password_reset',
+  'mail.resend',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

@@ -17,6 +17,8 @@ export const ERROR_STATUS = {
   conflict: 409,
   email_taken: 409,
   payload_too_large: 413,
+  token_expired: 410,
+  token_used: 410,
   rate_limited: 429,
   database_unavailable: 503,
   /** The payment provider could not be reached or answered with a server error; try again later. */

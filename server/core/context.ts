@@ -13,6 +13,27 @@ export interface Clock {
 
 export const systemClock: Clock = { now: () => new Date() };
 
+/** Settings of the reader-facing mail; each has a default, so scripts and tests may omit them. */
+export interface SiteSettings {
+  /** Where e-mailed links point (no trailing slash). */
+  publicBaseUrl: string;
+  /** First retry delay of a message the SMTP server did not take, s (doubling after). */
+  mailRetrySeconds: number;
+  /** Readers' mail-sending forms allowed per client IP and per address, per hour. */
+  readerMaxPerIp: number;
+  readerMaxPerAddress: number;
+  /** The local fake SMTP server's folder while it is in use (the Mailbox page), else null. */
+  fakeMailboxDir: string | null;
+}
+
+export const DEFAULT_SITE_SETTINGS: SiteSettings = {
+  publicBaseUrl: 'http://127.0.0.1:3000',
+  mailRetrySeconds: 30,
+  readerMaxPerIp: 30,
+  readerMaxPerAddress: 5,
+  fakeMailboxDir: null,
+};
+
 /**
  * What services may receive: the database handle and the app's collaborators. Each service
  * asks only for the ones it uses (a Pick of this), so scripts can build it with less.
@@ -28,4 +49,11 @@ export interface ServiceDeps {
   storage: FileStorage;
   /** The payment provider (Stripe through its SDK, or the local fake at PAYMENTS_API_URL). */
   payments: PaymentProvider;
+  /** Defaults from DEFAULT_SITE_SETTINGS for whatever is absent. */
+  site?: Partial<SiteSettings>;
+}
+
+export function siteSettings(deps: Pick<ServiceDeps, 'site'>): SiteSettings {
+  const s = { ...DEFAULT_SITE_SETTINGS, ...deps.site };
+  return { ...s, publicBaseUrl: s.publicBaseUrl.replace(/\/+$/, '') };
 }

@@ -15,6 +15,11 @@ export const QUEUES = {
   'process-file': { policy: 'standard', retryLimit: 6, retryDelay: 2, retryBackoff: true, expireInSeconds: 20 },
   /** Recompute a run's figures and flags; one waiting per run at most. */
   'analyze-run': { policy: 'stately', retryLimit: 6, retryDelay: 2, retryBackoff: true, expireInSeconds: 120 },
+  /**
+   * One delivery attempt of one outbox message. The outbox schedules its own retries (a new job
+   * with a later start); these settings only cover a handler that threw (the database away).
+   */
+  'send-mail': { policy: 'standard', retryLimit: 8, retryDelay: 5, retryBackoff: true, expireInSeconds: 120 },
 } as const satisfies Record<string, { policy: PgBoss.QueuePolicy; retryLimit: number; retryDelay: number; retryBackoff: boolean; expireInSeconds: number }>;
 export type QueueName = keyof typeof QUEUES;
 
@@ -23,6 +28,8 @@ export interface JobRequest {
   data: Record<string, string>;
   /** Jobs with the same key in a 'stately' queue wait at most once. */
   singletonKey?: string;
+  /** Not before this time (a retry's backoff). */
+  startAfter?: Date;
 }
 
 export interface JobQueue {
@@ -69,7 +76,12 @@ export async function startJobQueue(options: JobQueueOptions): Promise<JobQueue>
     if (!existing) await boss.createQueue(name, { name, ...settings });
   }
   const toInsert = (jobs: readonly JobRequest[]): PgBoss.JobInsert[] =>
-    jobs.map((j) => ({ name: j.name, data: j.data, ...(j.singletonKey ? { singletonKey: j.singletonKey } : {}) }));
+    jobs.map((j) => ({
+      name: j.name,
+      data: j.data,
+      ...(j.singletonKey ? { singletonKey: j.singletonKey } : {}),
+      ...(j.startAfter ? { startAfter: j.startAfter } : {}),
+    }));
 
   return {
     async enqueue(trx, jobs) {

@@ -12,6 +12,12 @@ describe('capability map', () => {
     expect(can('editor', 'runs.review')).toBe(true);
     expect(can('editor', 'reports.publish')).toBe(true);
   });
+  it('gives editors the triage of test requests and keeps the mail log for admins', () => {
+    expect(can('tester', 'requests.triage')).toBe(false);
+    expect(can('editor', 'requests.triage')).toBe(true);
+    expect(can('editor', 'mail.manage')).toBe(false);
+    expect(can('admin', 'mail.manage')).toBe(true);
+  });
   it('keeps user management for admins', () => {
     expect(can('tester', 'users.manage')).toBe(false);
     expect(can('editor', 'users.manage')).toBe(false);

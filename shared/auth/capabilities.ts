@@ -13,12 +13,14 @@ export const CAPABILITIES = [
   'runs.review', // request changes, approve (never a run one measured: a row-level rule)
   'reports.publish', // publish, correct, retract
   'users.manage', // invite staff, set roles, deactivate
+  'requests.triage', // readers' test requests: plan, decline, mark tested, merge
+  'mail.manage', // the send log (and sending a failed message again); the mailbox while the local fake runs
   'settings.manage',
 ] as const;
 export type Capability = (typeof CAPABILITIES)[number];
 
 const tester: readonly Capability[] = ['lab.enter', 'catalog.manage', 'runs.create', 'runs.upload'];
-const editor: readonly Capability[] = [...tester, 'runs.review', 'reports.publish'];
+const editor: readonly Capability[] = [...tester, 'runs.review', 'reports.publish', 'requests.triage'];
 const admin: readonly Capability[] = CAPABILITIES;
 
 export const ROLE_CAPABILITIES: Readonly<Record<Role, readonly Capability[]>> = {

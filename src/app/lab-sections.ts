@@ -15,6 +15,13 @@ export interface LabSection {
   load: () => Promise<unknown>;
   /** Listed in the lab navigation (sub-pages such as a run's page are not). */
   inNav: boolean;
+  /** Listed only while the server says so (the Mailbox exists only while the local fake SMTP runs). */
+  shownWhen?: 'fakeMailbox';
+}
+
+/** What the server told the client about its set-up (GET /api/lab/settings). */
+export interface LabNavFlags {
+  fakeMailbox?: boolean;
 }
 
 export const LAB_SECTIONS: readonly LabSection[] = [
@@ -29,12 +36,15 @@ export const LAB_SECTIONS: readonly LabSection[] = [
   { path: 'reports', label: 'Reports', capability: 'lab.enter', action: 'see reports', inNav: true, load: () => import('./routes/lab/reports.tsx') },
   { path: 'reports/new', label: 'New report', capability: 'reports.publish', action: 'make reports', inNav: false, load: () => import('./routes/lab/report-new.tsx') },
   { path: 'reports/:reportId', label: 'Report', capability: 'lab.enter', action: 'see reports', inNav: false, load: () => import('./routes/lab/report.tsx') },
+  { path: 'requests', label: 'Test requests', capability: 'requests.triage', action: 'triage test requests', inNav: true, load: () => import('./routes/lab/test-requests.tsx') },
   { path: 'admin/users', label: 'Users', capability: 'users.manage', action: 'manage users', inNav: true, load: () => import('./routes/lab/users.tsx') },
+  { path: 'admin/mail', label: 'Send log', capability: 'mail.manage', action: 'read the send log', inNav: true, load: () => import('./routes/lab/mail.tsx') },
+  { path: 'admin/mailbox', label: 'Mailbox', capability: 'mail.manage', action: 'read the mailbox', inNav: true, shownWhen: 'fakeMailbox', load: () => import('./routes/lab/mailbox.tsx') },
 ];
 
 /** The sections a role sees in the lab navigation, with their full paths. */
-export function labNavFor(role: Role): { to: string; label: string; end: boolean }[] {
-  return LAB_SECTIONS.filter((s) => s.inNav && can(role, s.capability)).map((s) => ({
+export function labNavFor(role: Role, flags: LabNavFlags = {}): { to: string; label: string; end: boolean }[] {
+  return LAB_SECTIONS.filter((s) => s.inNav && can(role, s.capability) && (!s.shownWhen || flags[s.shownWhen])).map((s) => ({
     to: s.path ? `/lab/${s.path}` : '/lab',
     label: s.label,
     end: s.path === '',

@@ -90,10 +90,18 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             { path: 'methodology', lazy: () => import('./routes/public/methodology.tsx').then(c) },
             { path: 'request', lazy: () => import('./routes/public/request.tsx').then(c) },
             { path: 'subscribe', lazy: () => import('./routes/public/subscribe.tsx').then(c) },
+            { path: 'subscribe/confirm', lazy: () => import('./routes/public/subscribe-confirm.tsx').then(c) },
+            { path: 'subscribe/preferences', lazy: () => import('./routes/public/subscribe-preferences.tsx').then(c) },
+            { path: 'subscribe/unsubscribe', lazy: () => import('./routes/public/subscribe-unsubscribe.tsx').then(c) },
+            { path: 'request/confirm', lazy: () => import('./routes/public/request-confirm.tsx').then(c) },
             { path: '*', lazy: () => import('./routes/public/not-found.tsx').then(c) },
           ],
         },
         { path: 'lab/sign-in', lazy: () => import('./routes/lab/sign-in.tsx').then(c) },
+        // Reached from e-mails, without a session: outside the signed-in lab layout.
+        { path: 'lab/welcome', lazy: () => import('./routes/lab/welcome.tsx').then(c) },
+        { path: 'lab/forgot-password', lazy: () => import('./routes/lab/forgot-password.tsx').then(c) },
+        { path: 'lab/reset-password', lazy: () => import('./routes/lab/reset-password.tsx').then(c) },
         {
           // Staff area: the layout's loader sends signed-out visitors to sign in.
           path: 'lab',

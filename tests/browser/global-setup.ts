@@ -6,16 +6,20 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import net from 'node:net';
+import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { freshDatabase } from '#scripts/lib/fresh-database.ts';
 import { CHROMIUM_PATH } from '#scripts/lib/chromium.ts';
 import { buildClient, knexCli, ROOT, seedDemoData } from '#scripts/lib/run-step.ts';
+import { startFakeSmtp, type FakeSmtp } from '#server/mail/fake-smtp.ts';
 
 declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
     chromiumPath: string;
+    /** The folder where the local fake SMTP server writes every e-mail as an .eml file. */
+    mailDir: string;
   }
 }
 
@@ -49,6 +53,7 @@ async function waitHealthy(url: string, child: ChildProcess, log: () => string) 
 
 let server: ChildProcess | null = null;
 let worker: ChildProcess | null = null;
+let smtp: FakeSmtp | null = null;
 
 export default async function setup(project: TestProject) {
   if (!fs.existsSync(CHROMIUM_PATH)) {
@@ -65,10 +70,13 @@ export default async function setup(project: TestProject) {
   }
 
   const port = await freePort();
+  // E-mail goes to a local fake SMTP server, as in the demo; tests read its folder.
+  smtp = await startFakeSmtp({ dir: fs.mkdtempSync(path.join(os.tmpdir(), 'benchlight-e2e-mail-')) });
+  const mailEnv = { SMTP_URL: smtp.url, FAKE_MAILBOX_DIR: smtp.dir, PUBLIC_BASE_URL: `http://127.0.0.1:${port}` };
   let output = '';
   server = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'main.ts')], {
     cwd: ROOT,
-    env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', DATABASE_URL: databaseUrl, SERVE_CLIENT: 'true', LOG_LEVEL: 'warn' },
+    env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', DATABASE_URL: databaseUrl, SERVE_CLIENT: 'true', LOG_LEVEL: 'warn', ...mailEnv },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   server.stdout?.on('data', (d) => (output += d));
@@ -76,7 +84,7 @@ export default async function setup(project: TestProject) {
   // The worker analyses uploads, as in production.
   worker = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'worker.ts')], {
     cwd: ROOT,
-    env: { ...process.env, NODE_ENV: 'test', DATABASE_URL: databaseUrl, LOG_LEVEL: 'warn' },
+    env: { ...process.env, NODE_ENV: 'test', DATABASE_URL: databaseUrl, LOG_LEVEL: 'warn', ...mailEnv },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   worker.stdout?.on('data', (d) => (output += d));
@@ -86,6 +94,7 @@ export default async function setup(project: TestProject) {
 
   project.provide('baseUrl', baseUrl);
   project.provide('chromiumPath', CHROMIUM_PATH);
+  project.provide('mailDir', smtp.dir);
 
   return async () => {
     for (const child of [server, worker]) {
@@ -93,6 +102,10 @@ export default async function setup(project: TestProject) {
         child.kill('SIGTERM');
         await new Promise((r) => child.once('exit', r));
       }
+    }
+    if (smtp) {
+      await smtp.close();
+      fs.rmSync(smtp.dir, { recursive: true, force: true });
     }
   };
 }

@@ -5,9 +5,10 @@ import { openBrowser, signIn } from './helpers/browser.ts';
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!;
 
 const EXPECTED_NAV: Record<string, string[]> = {
-  tester: ['Overview', 'Runs', 'File check', 'Catalog'],
-  editor: ['Overview', 'Runs', 'File check', 'Catalog', 'Review'],
-  admin: ['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Users'],
+  tester: ['Overview', 'Runs', 'File check', 'Catalog', 'Reports'],
+  editor: ['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Test requests'],
+  // The browser tests send mail to the local fake SMTP server, so the Mailbox is there.
+  admin: ['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Test requests', 'Users', 'Send log', 'Mailbox'],
 };
 
 describe('staff area in Chromium, per role', () => {
@@ -45,8 +46,9 @@ describe('staff area in Chromium, per role', () => {
   it('shows an admin the user list', async () => {
     await signIn(b.page, demo('admin').email, demo('admin').password);
     await b.page.getByRole('navigation', { name: 'Lab' }).getByRole('link', { name: 'Users' }).click();
-    await b.page.locator('table').waitFor();
-    const text = await b.page.locator('table').innerText();
+    const table = b.page.getByRole('table', { name: 'Staff accounts' });
+    await table.waitFor();
+    const text = await table.innerText();
     for (const u of DEMO_USERS) expect(text).toContain(u.email);
   });
 

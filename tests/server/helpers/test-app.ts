@@ -5,7 +5,7 @@ import { randomUUID } from 'node:crypto';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { createApp } from '#server/app.ts';
-import { loadConfig, type Config } from '#server/config.ts';
+import { loadConfig, siteSettingsFrom, type Config } from '#server/config.ts';
 import { createDb, closeDb, type DbHandles } from '#server/db/knex.ts';
 import { createSessionAuth } from '#server/auth/session-auth.ts';
 import { systemCaller } from '#server/core/caller.ts';
@@ -31,6 +31,8 @@ export interface TestAppOptions {
   payments?: boolean | { retryDelaysMs?: number[]; maxNetworkRetries?: number; dataFile?: string };
   /** Handlers for the provider's webhook events, as the pledge code will register them. */
   paymentEventHandlers?: PaymentEventHandlers;
+  /** Another mailer (e.g. real SMTP to the local fake); default: collected in memory in `sent`. */
+  mailer?: Mailer;
 }
 
 /**
@@ -71,7 +73,7 @@ export async function makeTestApp(
   const payments = createPaymentProvider(config, { maxNetworkRetries, timeoutMs: 5000 });
   const db: DbHandles = createDb(databaseUrl, () => {});
   const sent: MailMessage[] = [];
-  const mailer: Mailer = { send: async (m) => void sent.push(m) };
+  const mailer: Mailer = options.mailer ?? { send: async (m) => void sent.push(m) };
   const logger = pino({ level: 'silent' });
   // The real queue in the test database: uploads queue their jobs; tests run them with runJobs().
   const queue = await startJobQueue({ databaseUrl, logger, supervise: false });
@@ -88,6 +90,7 @@ export async function makeTestApp(
     queue,
     storage: createPgFileStorage(db.knex),
     payments,
+    site: siteSettingsFrom(config),
   }, { paymentEventHandlers: options.paymentEventHandlers });
   // The worker's handlers in this process, on the same queue, for tests that need files analysed.
   if (options.worker) await registerJobHandlers(queue, services, logger);

@@ -4,8 +4,8 @@ import type { SessionUser } from '#shared/schemas/users.ts';
 import { renderApp } from '#src/test/render-app.tsx';
 import { meAnswer, people, stubFetch } from '#src/test/fetch-stub.ts';
 
-async function labNavItems(user: SessionUser) {
-  stubFetch({ 'GET /api/me': meAnswer(user) });
+async function labNavItems(user: SessionUser, settings = { fakeMailbox: false }) {
+  stubFetch({ 'GET /api/me': meAnswer(user), 'GET /api/lab/settings': { body: settings } });
   renderApp('/lab');
   const nav = await screen.findByRole('navigation', { name: 'Lab' });
   return within(nav)
@@ -18,12 +18,20 @@ describe('lab shell', () => {
     expect(await labNavItems(people.tester)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Reports']);
   });
 
-  it('shows an editor Review as well', async () => {
-    expect(await labNavItems(people.editor)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports']);
+  it('shows an editor Review and Test requests as well', async () => {
+    expect(await labNavItems(people.editor)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Test requests']);
   });
 
-  it('shows an admin Users as well', async () => {
-    expect(await labNavItems(people.admin)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Users']);
+  it('shows an admin Users and the Send log as well', async () => {
+    expect(await labNavItems(people.admin)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Test requests', 'Users', 'Send log']);
+  });
+
+  it('shows an admin the Mailbox only while the server says mail goes to the local fake', async () => {
+    stubFetch({ 'GET /api/me': meAnswer(people.admin), 'GET /api/lab/settings': { body: { fakeMailbox: true } } });
+    renderApp('/lab');
+    const nav = await screen.findByRole('navigation', { name: 'Lab' });
+    await within(nav).findByRole('link', { name: 'Mailbox' });
+    expect(within(nav).getAllByRole('link').map((a) => a.textContent).slice(-2)).toEqual(['Send log', 'Mailbox']);
   });
 
   it('names the signed-in user and role and offers to sign out', async () => {

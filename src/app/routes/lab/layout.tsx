@@ -19,6 +19,7 @@ import { meQueryOptions, useMe } from '#src/features/auth/api/get-me.ts';
 import { useSignOut } from '#src/features/auth/api/sign-out.ts';
 import { LabHeader } from '#src/features/lab-home/components/lab-header.tsx';
 import { LabNav } from '#src/features/lab-home/components/lab-nav.tsx';
+import { labSettingsQueryOptions, useLabSettings } from '#src/features/mail/api/lab-settings.ts';
 import { labNavFor } from '#src/app/lab-sections.ts';
 import { useFocusMainOnNavigate } from '#src/hooks/use-focus-main-on-navigate.ts';
 import { isApiError } from '#src/lib/api-client.ts';
@@ -36,12 +37,17 @@ export const clientLoader =
       const url = new URL(request.url);
       throw redirect(signInPath(url.pathname, url.search));
     }
+    // The navigation depends on it (the Mailbox): fetched once before the first render, not
+    // on every navigation; without it the lab still works.
+    const settings = labSettingsQueryOptions();
+    if (!queryClient.getQueryState(settings.queryKey)) await queryClient.ensureQueryData(settings).catch(() => null);
     return null;
   };
 
 export default function LabLayout() {
   useFocusMainOnNavigate();
   const me = useMe();
+  const settings = useLabSettings();
   const location = useLocation();
   const navigate = useNavigate();
   const queryClient = useQueryClient();
@@ -80,7 +86,7 @@ export default function LabLayout() {
         onSignOut={onSignOut}
         signingOut={signOut.isPending}
       />
-      <LabNav items={labNavFor(user.role)} />
+      <LabNav items={labNavFor(user.role, { fakeMailbox: settings.data?.fakeMailbox })} />
       <main id="main" tabIndex={-1} className="mx-auto w-full max-w-page flex-1 px-gutter py-10">
         {signOut.isError ? (
           <Alert tone="error" className="mb-6">

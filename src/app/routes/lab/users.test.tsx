@@ -89,56 +89,50 @@ describe('admin users page', () => {
   });
 });
 
-describe('add a staff member form', () => {
+describe('invite a staff member form', () => {
+  const invitation = { id: 'inv-1', email: 'new.person@bench.test', displayName: 'New Person', role: 'editor', status: 'pending', invitedBy: 'Ada Admin', expiresAt: '2025-02-06T10:00:00.000Z', createdAt: stamp, acceptedAt: null };
+
   it('shows validation errors from the shared schema and sends nothing', async () => {
-    const { calls } = adminApi();
+    const { calls } = adminApi({ 'GET /api/admin/invitations': { body: { invitations: [] } } });
     const { user } = renderApp('/lab/admin/users');
-    const form = await screen.findByRole('form', { name: 'Add a staff member' });
+    const form = await screen.findByRole('form', { name: 'Invite a staff member' });
+    expect(within(form).queryByLabelText(/password/i)).toBeNull();
     await user.type(within(form).getByLabelText('E-mail'), 'not-an-address');
-    await user.type(within(form).getByLabelText('Initial password'), 'short');
-    await user.click(within(form).getByRole('button', { name: 'Add staff member' }));
+    await user.click(within(form).getByRole('button', { name: 'Send the invitation' }));
     expect(await within(form).findByText('Enter a valid e-mail address.')).toBeTruthy();
     expect(within(form).getByText('Enter a name.')).toBeTruthy();
-    expect(within(form).getByText('Use at least 12 characters.')).toBeTruthy();
-    expect(within(form).getByLabelText('Initial password').getAttribute('aria-invalid')).toBe('true');
+    expect(within(form).getByLabelText('E-mail').getAttribute('aria-invalid')).toBe('true');
     expect(calls.some((c) => c.method === 'POST')).toBe(false);
   });
 
-  it("shows the server's field errors (422 details) and email_taken", async () => {
-    let answer = errorAnswer(422, 'validation_failed', 'Check the fields', [
-      { path: 'displayName', message: 'That name is too long for the server.' },
-    ]);
-    adminApi({ 'POST /api/admin/users': () => answer });
+  it('sends the parsed body, confirms, and shows email_taken on the field', async () => {
+    let answer: { status: number; body: unknown } = { status: 201, body: { invitation } };
+    const { calls } = adminApi({ 'GET /api/admin/invitations': { body: { invitations: [] } }, 'POST /api/admin/invitations': () => answer });
     const { user } = renderApp('/lab/admin/users');
-    const form = await screen.findByRole('form', { name: 'Add a staff member' });
-    await user.type(within(form).getByLabelText('E-mail'), 'new.person@bench.test');
-    await user.type(within(form).getByLabelText('Name'), 'New Person');
-    await user.type(within(form).getByLabelText('Initial password'), 'a long enough passphrase');
-    await user.click(within(form).getByRole('button', { name: 'Add staff member' }));
-    expect(await within(form).findByText('That name is too long for the server.')).toBeTruthy();
-
-    answer = errorAnswer(409, 'email_taken', 'Taken');
-    await user.click(within(form).getByRole('button', { name: 'Add staff member' }));
-    expect(await within(form).findByText('A staff account with this e-mail already exists.')).toBeTruthy();
-  });
-
-  it('sends the parsed body and confirms success', async () => {
-    const created = asUser({ id: 'u-new', email: 'new.person@bench.test', displayName: 'New Person', role: 'editor' });
-    const { calls } = adminApi({ 'POST /api/admin/users': { status: 201, body: { user: created } } });
-    const { user } = renderApp('/lab/admin/users');
-    const form = await screen.findByRole('form', { name: 'Add a staff member' });
+    const form = await screen.findByRole('form', { name: 'Invite a staff member' });
     await user.type(within(form).getByLabelText('E-mail'), '  New.Person@Bench.test ');
     await user.type(within(form).getByLabelText('Name'), 'New Person');
     await user.selectOptions(within(form).getByLabelText('Role'), 'editor');
-    await user.type(within(form).getByLabelText('Initial password'), 'a long enough passphrase');
-    await user.click(within(form).getByRole('button', { name: 'Add staff member' }));
-    expect(await within(form).findByText(/New Person \(new\.person@bench\.test\) can now sign in as Editor\./)).toBeTruthy();
-    expect(calls.find((c) => c.method === 'POST')?.body).toEqual({
-      email: 'new.person@bench.test',
-      displayName: 'New Person',
-      role: 'editor',
-      password: 'a long enough passphrase',
+    await user.click(within(form).getByRole('button', { name: 'Send the invitation' }));
+    expect(await within(form).findByText(/New Person \(new\.person@bench\.test\) is invited as Editor\./)).toBeTruthy();
+    expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ email: 'new.person@bench.test', displayName: 'New Person', role: 'editor' });
+
+    answer = errorAnswer(409, 'email_taken', 'Taken') as typeof answer;
+    await user.type(within(form).getByLabelText('E-mail'), 'ada@bench.test');
+    await user.type(within(form).getByLabelText('Name'), 'Ada');
+    await user.click(within(form).getByRole('button', { name: 'Send the invitation' }));
+    expect(await within(form).findByText('A staff account with this e-mail already exists.')).toBeTruthy();
+  });
+
+  it('lists pending invitations and withdraws one', async () => {
+    const { calls } = adminApi({
+      'GET /api/admin/invitations': { body: { invitations: [invitation] } },
+      'POST /api/admin/invitations/inv-1/revoke': { body: { invitation: { ...invitation, status: 'revoked' } } },
     });
-    expect((within(form).getByLabelText('E-mail') as HTMLInputElement).value).toBe('');
+    const { user } = renderApp('/lab/admin/users');
+    const table = await screen.findByRole('table', { name: 'Staff invitations' });
+    expect(within(table).getByText('new.person@bench.test')).toBeTruthy();
+    await user.click(within(table).getByRole('button', { name: 'Withdraw the invitation of new.person@bench.test' }));
+    expect(calls.some((c) => c.method === 'POST' && c.path === '/api/admin/invitations/inv-1/revoke')).toBe(true);
   });
 });

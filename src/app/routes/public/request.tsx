@@ -1,10 +1,42 @@
-import { NotYetBuilt } from '#src/components/not-yet-built.tsx';
+import type { QueryClient } from '@tanstack/react-query';
+import { ErrorState } from '#src/components/error-state.tsx';
+import { PageHeader } from '#src/components/page-header.tsx';
+import { Spinner } from '#src/components/spinner.tsx';
+import { testRequestsQueryOptions, useTestRequests } from '#src/features/test-requests/api/get-test-requests.ts';
+import { RequestForm } from '#src/features/test-requests/components/request-form.tsx';
+import { RequestList } from '#src/features/test-requests/components/request-list.tsx';
+
+export const clientLoader = (queryClient: QueryClient) => async () => {
+  void queryClient.prefetchQuery(testRequestsQueryOptions());
+  return null;
+};
 
 export default function RequestRoute() {
+  const requests = useTestRequests();
   return (
-    <NotYetBuilt
-      title="Request a test"
-      willHold="a form to ask us to test a device, and the list of requests already made, which you can vote for."
-    />
+    <>
+      <PageHeader
+        eyebrow="Request a test"
+        title="Which device should we test next?"
+        description="Ask for a device, or vote for one already asked for. Votes count once confirmed by e-mail, one per address."
+      />
+      <div className="grid gap-section lg:grid-cols-[3fr_2fr]">
+        <section aria-labelledby="requests-heading">
+          <h2 id="requests-heading" className="mb-4 text-xl font-semibold">
+            Requests, most votes first
+          </h2>
+          {requests.isPending ? (
+            <Spinner label="Loading the requests…" />
+          ) : requests.isError ? (
+            <ErrorState inline title="The requests could not be loaded" error={requests.error} onRetry={() => void requests.refetch()} />
+          ) : (
+            <RequestList requests={requests.data} />
+          )}
+        </section>
+        <div>
+          <RequestForm />
+        </div>
+      </div>
+    </>
   );
 }

@@ -1,10 +1,15 @@
-import { NotYetBuilt } from '#src/components/not-yet-built.tsx';
+import { PageHeader } from '#src/components/page-header.tsx';
+import { SubscribeForm } from '#src/features/subscriptions/components/subscribe-form.tsx';
 
 export default function SubscribeRoute() {
   return (
-    <NotYetBuilt
-      title="Subscribe"
-      willHold="a form to get an e-mail whenever a new report is published, with a choice of topics and a one-click unsubscribe in every message."
-    />
+    <>
+      <PageHeader
+        eyebrow="Subscribe"
+        title="New reports by e-mail"
+        description="One e-mail when we publish a report: its key figures, a small coverage map and the link to the whole report."
+      />
+      <SubscribeForm />
+    </>
   );
 }

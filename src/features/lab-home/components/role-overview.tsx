@@ -8,7 +8,9 @@ const CAPABILITY_TEXT: Record<Capability, string> = {
   'runs.upload': 'Upload spectroradiometer and meter exports to a run, fix them and resubmit.',
   'runs.review': 'Review submitted runs: request changes or approve (never a run you measured).',
   'reports.publish': 'Publish reports, and correct or retract them with a note.',
-  'users.manage': 'Add staff, set their roles, deactivate and reactivate accounts.',
+  'users.manage': 'Invite staff, set their roles, deactivate and reactivate accounts.',
+  'requests.triage': 'Triage readers’ test requests: plan, decline with a reason, mark tested with the report, merge near-duplicates.',
+  'mail.manage': 'Read the send log of every e-mail, send a failed one again, and open the demo mailbox.',
   'settings.manage': 'Change site settings.',
 };
 
