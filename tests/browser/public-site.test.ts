@@ -27,6 +27,7 @@ describe('the public site in Chromium, as a reader and as an editor', () => {
     const page = b.page;
     await page.goto('/');
     await page.getByRole('heading', { level: 2, name: 'Latest reports' }).waitFor();
+    await page.getByText(/Coverage at \d+ cm; dashed: emitting area/).first().waitFor();
     // At least three published demo reports, each with its small coverage picture.
     expect(await page.getByText(/Coverage at \d+ cm; dashed: emitting area/).count()).toBeGreaterThanOrEqual(3);
     await expectAccessible(page, 'home');

@@ -46,15 +46,6 @@ describe('public shell', () => {
     }
   });
 
-  it('says plainly that an unbuilt page is not built yet', async () => {
-    stubFetch({});
-    renderApp('/request');
-    expect((await screen.findByRole('heading', { level: 1 })).textContent).toBe('Request a test');
-    expect(screen.getByText('This page is not built yet.')).toBeTruthy();
-    const current = within(screen.getByRole('navigation', { name: 'Main' })).getByRole('link', { name: 'Request a test' });
-    expect(current.getAttribute('aria-current')).toBe('page');
-  });
-
   it('shows "Page not found" with a link home for an unknown path', async () => {
     stubFetch({});
     renderApp('/no/such/page');
