@@ -3,7 +3,8 @@ import type { GridPlane } from '#shared/measurement/check/analyze-grid.ts';
 import { coverageMap } from '#shared/measurement/plane/coverage-map.ts';
 import { DATA_COLORS } from './data-colors.ts';
 import { formatFigure, formatLength } from '#src/lib/format.ts';
-import { cellPaths, mapFrame, niceTicks, placeLabel, polygonsPath, type BoundsCm, type LabelBox } from './map-geometry.ts';
+import { lengthTicks } from './unit-ticks.ts';
+import { cellPaths, mapFrame, placeLabel, polygonsPath, type BoundsCm, type LabelBox } from './map-geometry.ts';
 import { CoverageLegend, ISOLINE_DASH } from './coverage-legend.tsx';
 
 /** Most cells the drawn map gets per axis: enough to read, few enough for SVG to stay quick. */
@@ -33,6 +34,8 @@ export interface CoverageMapFigureProps {
   legend?: boolean;
   /** Names the map in its title (default "Coverage map at 30 cm"). */
   title?: string;
+  /** The axes' length unit (default cm); the drawing stays in cm, only the tick labels change. */
+  lengthUnit?: 'cm' | 'in';
 }
 
 /** The frame of a map: the measured area, widened to `extent` when one is given. */
@@ -51,7 +54,7 @@ function frameBounds(bounds: BoundsCm, extent: BoundsCm | undefined): BoundsCm {
  * isolines outlined and labelled, the measured points as dots, cm axes. The same numbers are in
  * the tables beside it, so the picture is never the only way to read them.
  */
-export function CoverageMapFigure({ plane, scaleMax, extentCm, legend = true, title }: CoverageMapFigureProps) {
+export function CoverageMapFigure({ plane, scaleMax, extentCm, legend = true, title, lengthUnit = 'cm' }: CoverageMapFigureProps) {
   const titleId = useId();
   const descId = useId();
   const { coverage, points, distanceCm } = plane;
@@ -80,10 +83,10 @@ export function CoverageMapFigure({ plane, scaleMax, extentCm, legend = true, ti
       frame,
       cells: cellPaths(drawn, scaleTop, frame),
       lines,
-      xTicks: niceTicks(framed.minXCm, framed.maxXCm),
-      yTicks: niceTicks(framed.minYCm, framed.maxYCm, 6),
+      xTicks: lengthTicks(framed.minXCm, framed.maxXCm, lengthUnit),
+      yTicks: lengthTicks(framed.minYCm, framed.maxYCm, lengthUnit, 6),
     };
-  }, [bounds, drawn, peak, scaleTop, coverage.isolines, eMinX, eMaxX, eMinY, eMaxY]);
+  }, [bounds, drawn, peak, scaleTop, coverage.isolines, eMinX, eMaxX, eMinY, eMaxY, lengthUnit]);
 
   if (!drawing || !bounds || peak === null || scaleTop === null) {
     return (
@@ -181,24 +184,24 @@ export function CoverageMapFigure({ plane, scaleMax, extentCm, legend = true, ti
           )}
           <g fontSize={11} fill={DATA_COLORS.inkMuted}>
             {xTicks.map((t) => (
-              <g key={`x${t}`}>
-                <line x1={frame.px(t)} x2={frame.px(t)} y1={plot.bottom} y2={plot.bottom + 5} stroke={DATA_COLORS.inkMuted} />
-                <text x={frame.px(t)} y={plot.bottom + 17} textAnchor="middle">
-                  {formatLength(t)}
+              <g key={`x${t.cm}`}>
+                <line x1={frame.px(t.cm)} x2={frame.px(t.cm)} y1={plot.bottom} y2={plot.bottom + 5} stroke={DATA_COLORS.inkMuted} />
+                <text x={frame.px(t.cm)} y={plot.bottom + 17} textAnchor="middle">
+                  {t.label}
                 </text>
               </g>
             ))}
             {yTicks.map((t) => (
-              <g key={`y${t}`}>
-                <line x1={plot.left - 5} x2={plot.left} y1={frame.py(t)} y2={frame.py(t)} stroke={DATA_COLORS.inkMuted} />
-                <text x={plot.left - 8} y={frame.py(t) + 4} textAnchor="end">
-                  {formatLength(t)}
+              <g key={`y${t.cm}`}>
+                <line x1={plot.left - 5} x2={plot.left} y1={frame.py(t.cm)} y2={frame.py(t.cm)} stroke={DATA_COLORS.inkMuted} />
+                <text x={plot.left - 8} y={frame.py(t.cm) + 4} textAnchor="end">
+                  {t.label}
                 </text>
               </g>
             ))}
           </g>
           <text x={(plot.left + plot.right) / 2} y={frame.height - 6} textAnchor="middle" fontSize={12} fill={DATA_COLORS.ink}>
-            x (cm)
+            x ({lengthUnit})
           </text>
           <text
             transform={`translate(14 ${(plot.top + plot.bottom) / 2}) rotate(-90)`}
@@ -206,7 +209,7 @@ export function CoverageMapFigure({ plane, scaleMax, extentCm, legend = true, ti
             fontSize={12}
             fill={DATA_COLORS.ink}
           >
-            y (cm)
+            y ({lengthUnit})
           </text>
         </svg>
       </div>

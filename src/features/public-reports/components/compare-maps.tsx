@@ -40,6 +40,7 @@ export function CompareMaps({ planes, distanceCm }: { planes: readonly ComparedP
                     scaleMax={scaleMax ?? undefined}
                     extentCm={extent}
                     legend={false}
+                    lengthUnit={units.length}
                     title={`Coverage map of ${p.label} at ${units.formatLength(distanceCm)}`}
                   />
                 </>
