@@ -46,11 +46,10 @@ describe('public shell', () => {
     }
   });
 
-  it('says plainly that an unbuilt page is not built yet', async () => {
-    stubFetch({});
+  it('marks the section of the page in the main navigation', async () => {
+    stubFetch({ 'GET /api/public/test-requests': { body: { requests: [] } } });
     renderApp('/request');
-    expect((await screen.findByRole('heading', { level: 1 })).textContent).toBe('Request a test');
-    expect(screen.getByText('This page is not built yet.')).toBeTruthy();
+    expect((await screen.findByRole('heading', { level: 1 })).textContent).toBe('Which device should we test next?');
     const current = within(screen.getByRole('navigation', { name: 'Main' })).getByRole('link', { name: 'Request a test' });
     expect(current.getAttribute('aria-current')).toBe('page');
   });
