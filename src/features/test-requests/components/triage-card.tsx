@@ -31,6 +31,8 @@ export function TriageCard({ request, others, reports, children }: { request: La
   const [reportId, setReportId] = useState(request.reportId ?? '');
   const [intoId, setIntoId] = useState('');
   const [error, setError] = useState<string | undefined>();
+  // Known when the decision is sent: the answer may come after the refunds are already done.
+  const [refunding, setRefunding] = useState(false);
   const device = `${request.maker} ${request.model}`;
 
   const onSave = (e: FormEvent) => {
@@ -41,6 +43,7 @@ export function TriageCard({ request, others, reports, children }: { request: La
       return;
     }
     setError(undefined);
+    setRefunding(parsed.data.status === 'declined' && request.status !== 'declined' && request.funding.backers > 0);
     triage.mutate({ id: request.id, body: parsed.data });
   };
 
@@ -72,7 +75,7 @@ export function TriageCard({ request, others, reports, children }: { request: La
                 Saved
                 {triage.data.status === 'tested' && triage.data.report
                   ? '. Voters and backers who asked are e-mailed once the report is published.'
-                  : triage.data.status === 'declined' && triage.data.funding.refundsUnderWay > 0
+                  : triage.data.status === 'declined' && refunding
                     ? '. Every paid pledge is being refunded; each backer gets an e-mail.'
                     : '.'}
               </Alert>
