@@ -34,6 +34,8 @@ import { oneClickUnsubscribeRoutes, subscriptionsRoutes } from './routes/subscri
 import { testRequestsRoutes } from './routes/test-requests-routes.ts';
 import { staffAccessRoutes } from './routes/staff-access-routes.ts';
 import { mailRoutes } from './routes/mail-routes.ts';
+import { pledgesRoutes } from './routes/pledges-routes.ts';
+import { ledgerRoutes } from './routes/ledger-routes.ts';
 import { withPageMeta } from './http/index-html.ts';
 import { publicBaseUrl } from './http/public-url.ts';
 
@@ -129,6 +131,8 @@ export function createApp(deps: AppDeps): Express {
   api.use(testRequestsRoutes(services));
   api.use(staffAccessRoutes(services));
   api.use(mailRoutes(services));
+  api.use(pledgesRoutes(services, { publicBaseUrl: config.PUBLIC_BASE_URL }));
+  api.use(ledgerRoutes(services));
   api.use(apiNotFound);
   app.use('/api', api);
   app.use(siteRoutes(services, { publicBaseUrl: config.PUBLIC_BASE_URL }));

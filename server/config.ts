@@ -57,6 +57,10 @@ export const configSchema = z.object({
     .regex(/^[A-Za-z]{3}$/, { message: 'A three-letter currency code, e.g. EUR.' })
     .transform((c) => c.toUpperCase())
     .default('EUR'),
+  /** One day of bench time in minor units of PAYMENTS_CURRENCY: a request's goal is the unit's price plus this. */
+  BENCH_DAY_COST_MINOR: z.coerce.number().int().min(0).max(99_999_999).default(40000),
+  /** The smallest pledge a reader can make, in minor units of PAYMENTS_CURRENCY. */
+  PLEDGE_MIN_MINOR: z.coerce.number().int().min(1).max(99_999_999).default(500),
 });
 
 export type Config = z.infer<typeof configSchema> & { serveClient: boolean };
@@ -100,5 +104,8 @@ export function siteSettingsFrom(config: Config) {
     readerMaxPerIp: config.READER_MAX_PER_IP,
     readerMaxPerAddress: config.READER_MAX_PER_ADDRESS,
     fakeMailboxDir: config.FAKE_MAILBOX_DIR ?? null,
+    paymentsCurrency: config.PAYMENTS_CURRENCY,
+    benchDayCostMinor: config.BENCH_DAY_COST_MINOR,
+    pledgeMinMinor: config.PLEDGE_MIN_MINOR,
   };
 }

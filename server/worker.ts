@@ -1,6 +1,7 @@
 /**
  * The worker process (npm run worker): runs the jobs the web processes queue — each uploaded
- * file's analysis, each run's figures and every e-mail of the outbox. Several workers may run
+ * file's analysis, each run's figures, every e-mail of the outbox, and readers' refunds and the
+ * fees of their payments (with a daily look for requests not tested in time). Several workers may run
  * against one database; the queue hands each job to one of them, and a job lost with a worker is
  * retried after it expires.
  */
@@ -9,7 +10,7 @@ import { connect } from './connect.ts';
 import { resolveDatabaseUrl } from './db/database-url.ts';
 import { createLogger } from './logger.ts';
 import { createPaymentProvider } from './payments/create-payment-provider.ts';
-import { registerJobHandlers, startOutboxSweep } from './job-handlers.ts';
+import { registerJobHandlers, startFundingSweep, startOutboxSweep } from './job-handlers.ts';
 import { createMailer } from './mail/mailer.ts';
 
 const config = loadConfig();
@@ -25,6 +26,7 @@ const app = await connect({
 });
 await registerJobHandlers(app.queue, app.services, logger);
 const stopSweep = startOutboxSweep(app.services, logger);
+const stopFundingSweep = startFundingSweep(app.queue, logger);
 logger.info('worker started');
 console.log('Benchlight worker is running.');
 
@@ -35,6 +37,7 @@ async function shutdown(signal: string) {
   logger.info({ signal }, 'worker stopping');
   setTimeout(() => process.exit(0), 8000).unref();
   stopSweep();
+  stopFundingSweep();
   await app.close();
   process.exit(0);
 }

@@ -46,5 +46,15 @@ export const AUDIT_ACTIONS = [
   'invitation.accept',
   'user.password_reset',
   'mail.resend',
+  'test_request.goal_set',
+  'test_request.goal_reached',
+  'test_request.funding_refunded',
+  'pledge.create',
+  'pledge.pay',
+  'pledge.fail',
+  'pledge.expire',
+  'pledge.request_refund',
+  'pledge.refund',
+  'pledge.settle',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

@@ -15,6 +15,8 @@ export const ERROR_STATUS = {
   origin_rejected: 403,
   not_found: 404,
   conflict: 409,
+  /** A pledge toward a request that takes none now (no goal, goal reached, declined, tested or merged). */
+  pledges_closed: 409,
   email_taken: 409,
   payload_too_large: 413,
   token_expired: 410,

@@ -24,6 +24,12 @@ export interface SiteSettings {
   readerMaxPerAddress: number;
   /** The local fake SMTP server's folder while it is in use (the Mailbox page), else null. */
   fakeMailboxDir: string | null;
+  /** The currency readers pledge in (PAYMENTS_CURRENCY). */
+  paymentsCurrency: string;
+  /** One bench day, minor units: added to a unit's price to make a request's goal. */
+  benchDayCostMinor: number;
+  /** The smallest pledge, minor units. */
+  pledgeMinMinor: number;
 }
 
 export const DEFAULT_SITE_SETTINGS: SiteSettings = {
@@ -32,6 +38,9 @@ export const DEFAULT_SITE_SETTINGS: SiteSettings = {
   readerMaxPerIp: 30,
   readerMaxPerAddress: 5,
   fakeMailboxDir: null,
+  paymentsCurrency: 'EUR',
+  benchDayCostMinor: 40000,
+  pledgeMinMinor: 500,
 };
 
 /**

@@ -64,6 +64,19 @@ export interface RefundResult {
   status: 'pending' | 'requires_action' | 'succeeded' | 'failed' | 'canceled' | (string & {});
   amountMinor: number;
   currency: string;
+  /** When the provider made the refund (its own clock). */
+  created: Date;
+}
+
+/** A payment as the provider settled it: the charge behind it and its balance transaction (with the fee). */
+export interface PaymentDetails {
+  paymentIntentId: string;
+  status: string;
+  /** The successful charge, once there is one. */
+  chargeId: string | null;
+  /** The charge's entry in the balance: amount, the provider's fee, net, and when. */
+  balanceTransaction: BalanceTransactionRow | null;
+  metadata: Record<string, string>;
 }
 
 /** A verified webhook event as the provider sent it (its id is unique per event, kept on resends). */
@@ -95,6 +108,8 @@ export interface PaymentProvider {
   retrieveCheckout(id: string): Promise<CheckoutState>;
   /** Closes an open checkout so it can no longer be paid. */
   expireCheckout(id: string): Promise<void>;
+  /** A payment intent with its latest charge and that charge's balance transaction (for the fee). */
+  retrievePayment(paymentIntentId: string): Promise<PaymentDetails>;
   refund(input: RefundInput): Promise<RefundResult>;
   /**
    * Checks the signature header against the raw request body (byte for byte) and answers the

@@ -10,6 +10,7 @@ import type {
   CheckoutCreated,
   CheckoutState,
   CreateCheckoutInput,
+  PaymentDetails,
   PaymentEvent,
   PaymentProvider,
   RefundInput,
@@ -91,6 +92,20 @@ export function createStripePaymentProvider(options: StripeProviderOptions): Pay
       await call('expire a checkout', () => stripe.checkout.sessions.expire(id));
     },
 
+    async retrievePayment(paymentIntentId: string): Promise<PaymentDetails> {
+      const pi = await call('read a payment', () => stripe.paymentIntents.retrieve(paymentIntentId, { expand: ['latest_charge.balance_transaction'] }));
+      const charge = typeof pi.latest_charge === 'string' ? null : pi.latest_charge;
+      const chargeId = typeof pi.latest_charge === 'string' ? pi.latest_charge : (pi.latest_charge?.id ?? null);
+      const t = charge && typeof charge.balance_transaction === 'object' ? charge.balance_transaction : null;
+      return {
+        paymentIntentId: pi.id,
+        status: pi.status,
+        chargeId,
+        balanceTransaction: t ? balanceRow(t) : null,
+        metadata: { ...(pi.metadata ?? {}) },
+      };
+    },
+
     async refund(input: RefundInput): Promise<RefundResult> {
       if (input.amountMinor !== undefined) assertMinorUnits(input.amountMinor, 'amountMinor');
       const r = await call('refund a payment', () =>
@@ -103,7 +118,7 @@ export function createStripePaymentProvider(options: StripeProviderOptions): Pay
           { idempotencyKey: input.idempotencyKey },
         ),
       );
-      return { id: r.id, status: r.status ?? 'pending', amountMinor: r.amount, currency: r.currency.toUpperCase() };
+      return { id: r.id, status: r.status ?? 'pending', amountMinor: r.amount, currency: r.currency.toUpperCase(), created: new Date(r.created * 1000) };
     },
 
     verifyWebhook(rawBody: Buffer, signatureHeader: string | undefined): PaymentEvent {
@@ -129,20 +144,24 @@ export function createStripePaymentProvider(options: StripeProviderOptions): Pay
         const rows: BalanceTransactionRow[] = [];
         // The SDK follows has_more / starting_after page by page.
         for await (const t of stripe.balanceTransactions.list({ ...(Object.keys(created).length ? { created } : {}), limit: 100 })) {
-          rows.push({
-            id: t.id,
-            type: t.type,
-            amountMinor: t.amount,
-            feeMinor: t.fee,
-            netMinor: t.net,
-            currency: t.currency.toUpperCase(),
-            sourceId: typeof t.source === 'string' ? t.source : (t.source?.id ?? null),
-            created: new Date(t.created * 1000),
-          });
+          rows.push(balanceRow(t));
         }
         return rows;
       });
     },
+  };
+}
+
+function balanceRow(t: Stripe.BalanceTransaction): BalanceTransactionRow {
+  return {
+    id: t.id,
+    type: t.type,
+    amountMinor: t.amount,
+    feeMinor: t.fee,
+    netMinor: t.net,
+    currency: t.currency.toUpperCase(),
+    sourceId: typeof t.source === 'string' ? t.source : (t.source?.id ?? null),
+    created: new Date(t.created * 1000),
   };
 }
 

@@ -17,6 +17,7 @@ export function createUnconfiguredPaymentProvider(): PaymentProvider {
     createCheckout: refuse,
     retrieveCheckout: refuse,
     expireCheckout: refuse,
+    retrievePayment: refuse,
     refund: refuse,
     balanceTransactions: refuse,
     verifyWebhook() {

@@ -20,6 +20,17 @@ export const QUEUES = {
    * with a later start); these settings only cover a handler that threw (the database away).
    */
   'send-mail': { policy: 'standard', retryLimit: 8, retryDelay: 5, retryBackoff: true, expireInSeconds: 120 },
+  /**
+   * Refund one paid pledge at the provider. While the provider is unreachable the job fails and
+   * comes back after 2–4 s, then twice as long each time (pg-boss's backoff), 14 times: about
+   * 9 to 18 hours in all, so an outage of a morning is ridden out; then it stays failed for an
+   * admin (the ledger shows the pledge as being refunded).
+   */
+  'refund-pledge': { policy: 'standard', retryLimit: 14, retryDelay: 2, retryBackoff: true, expireInSeconds: 180 },
+  /** Read a paid pledge's charge and the provider's fee on it (for the ledger); retried the same way. */
+  'settle-pledge': { policy: 'standard', retryLimit: 14, retryDelay: 2, retryBackoff: true, expireInSeconds: 120 },
+  /** The daily look for requests not tested within 180 days of reaching their goal; one waiting at most. */
+  'sweep-funding': { policy: 'stately', retryLimit: 5, retryDelay: 60, retryBackoff: true, expireInSeconds: 600 },
 } as const satisfies Record<string, { policy: PgBoss.QueuePolicy; retryLimit: number; retryDelay: number; retryBackoff: boolean; expireInSeconds: number }>;
 export type QueueName = keyof typeof QUEUES;
 

@@ -86,6 +86,8 @@ export function publicRoutes(s: Pick<Services, 'publicReports'>, opts: { publicB
       irScreening: r.irScreening,
       unitSpread: r.unitSpread,
       keyFigures: r.keyFigures,
+      // How the test was paid for: readers' pledges or the lab (read now, not frozen at publication).
+      funding: r.funding,
       citation: r.citation,
     });
   };

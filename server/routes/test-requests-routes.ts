@@ -18,6 +18,11 @@ export function testRequestsRoutes(s: Pick<Services, 'testRequests'>): Router {
     res.setHeader('Cache-Control', 'no-store');
     res.json({ requests: await s.testRequests.listPublic() });
   });
+  router.get('/public/test-requests/:id', async (req, res) => {
+    const { id } = parseWith(requestParams, req.params, 'params');
+    res.setHeader('Cache-Control', 'no-store');
+    res.json({ request: await s.testRequests.getPublic(id) });
+  });
   router.post('/public/test-requests', async (req, res) => {
     await s.testRequests.create(req.caller, parseWith(createTestRequestBodySchema, req.body));
     res.status(202).json({ status: 'check_your_email' });

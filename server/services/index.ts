@@ -21,9 +21,14 @@ import { createInvitationsService } from './invitations-service.ts';
 import { createPasswordResetsService } from './password-resets-service.ts';
 import { createMailboxService } from './mailbox-service.ts';
 import { createReportMail } from './report-mail.ts';
+import { createPledgesService } from './pledges-service.ts';
+import { createLedgerService } from './ledger-service.ts';
 
 export interface ServicesOptions {
-  /** What to do with each kind of payment-provider event. */
+  /**
+   * Handlers for payment-provider events besides the pledges' own (which are always registered);
+   * one given here for the same event type replaces the pledges' (tests of the webhook intake).
+   */
   paymentEventHandlers?: PaymentEventHandlers;
 }
 
@@ -33,6 +38,7 @@ export function createServices(deps: ServiceDeps, options: ServicesOptions = {})
   const readerLimiter = createReaderLimiter(deps.db, { perIp: site.readerMaxPerIp, perAddress: site.readerMaxPerAddress });
   const outbox = createOutboxService(deps, createMailComposer(deps));
   const testRequests = createTestRequestsService(deps, outbox, readerLimiter);
+  const pledges = createPledgesService(deps, outbox, readerLimiter);
   // Publishing a report records its e-mails in the publication's own transaction.
   const reportMail = createReportMail(outbox, testRequests);
   const publicReports = createPublicReportsService(deps);
@@ -49,7 +55,9 @@ export function createServices(deps: ServiceDeps, options: ServicesOptions = {})
     runProcessing: createRunProcessingService(deps),
     reports: createReportsService(deps, { onPublished: reportMail.onPublished, afterPublicChange: () => publicReports.forget() }),
     publicReports,
-    paymentEvents: createPaymentEventsService(deps, { handlers: options.paymentEventHandlers }),
+    paymentEvents: createPaymentEventsService(deps, { handlers: { ...pledges.eventHandlers, ...options.paymentEventHandlers } }),
+    pledges,
+    ledger: createLedgerService(deps),
     outbox,
     subscriptions: createSubscriptionsService(deps, outbox, readerLimiter),
     testRequests,

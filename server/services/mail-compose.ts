@@ -14,6 +14,7 @@ import { siteSettings, type ServiceDeps } from '../core/context.ts';
 import type { Db } from '../db/knex.ts';
 import { emailTokensRepo } from '../db/repos/email-tokens-repo.ts';
 import { invitationsRepo } from '../db/repos/invitations-repo.ts';
+import { pledgesRepo } from '../db/repos/pledges-repo.ts';
 import type { OutboxRecord } from '../db/repos/outbox-repo.ts';
 import { reportsRepo } from '../db/repos/reports-repo.ts';
 import { subscribersRepo } from '../db/repos/subscribers-repo.ts';
@@ -24,6 +25,7 @@ import type { ComposedMail, ReaderLinks } from '../mail/templates/layout.ts';
 import { reportMail } from '../mail/templates/report-mail.ts';
 import { requestTestedMail, subscriptionConfirmMail, voteConfirmMail } from '../mail/templates/reader-mail.ts';
 import { invitationMail, passwordResetMail } from '../mail/templates/staff-mail.ts';
+import { pledgeRefundedMail } from '../mail/templates/pledge-mail.ts';
 
 export type Composition = { mail: ComposedMail } | { cancel: string };
 
@@ -110,18 +112,41 @@ export function createMailComposer(deps: Pick<ServiceDeps, 'db' | 'clock' | 'sit
 
     async request_tested(db, row) {
       const request = await testRequestsRepo.findById(db, str(row.payload.requestId));
-      const vote = await testRequestsRepo.findVote(db, str(row.payload.voteId));
-      if (!request || !vote) return { cancel: 'The request or the vote no longer exists.' };
-      if (!vote.notify) return { cancel: 'The voter turned these e-mails off before it went out.' };
+      // A voter, or a backer whose pledge paid toward the test.
+      const pledge = row.payload.pledgeId ? await pledgesRepo.find(db, str(row.payload.pledgeId)) : null;
+      const vote = pledge ? null : await testRequestsRepo.findVote(db, str(row.payload.voteId));
+      if (!request || !(vote || pledge)) return { cancel: 'The request, the vote or the pledge no longer exists.' };
+      if (vote && !vote.notify) return { cancel: 'The voter turned these e-mails off before it went out.' };
+      if (pledge && !pledge.notify) return { cancel: 'The backer turned these e-mails off before it went out.' };
+      if (pledge && pledge.status !== 'paid') return { cancel: 'The pledge was refunded before it went out.' };
       const report = request.reportId ? await reportsRepo.findById(db, request.reportId) : null;
       if (!report || report.status !== 'published') return { cancel: 'The report is not published (any more).' };
       const version = await reportsRepo.version(db, report.id, report.currentVersion);
       return {
         mail: requestTestedMail({
           device: `${request.maker} ${request.model}`,
+          as: pledge ? 'backer' : 'voter',
           reportTitle: version?.title ?? report.draftTitle,
           reportUrl: `${base()}/reports/${report.slug}`,
           reader: await readerLinks(db, row),
+        }),
+      };
+    },
+
+    async pledge_refunded(db, row) {
+      const pledge = await pledgesRepo.find(db, str(row.payload.pledgeId));
+      if (!pledge) return { cancel: 'The pledge no longer exists.' };
+      // Sent whatever the reader's mail choices: it is about their money, not news.
+      if (pledge.status !== 'refunded') return { cancel: 'The pledge is not refunded (any more).' };
+      const request = await testRequestsRepo.findById(db, pledge.requestId);
+      return {
+        mail: pledgeRefundedMail({
+          device: request ? `${request.maker} ${request.model}` : 'the requested device',
+          amountMinor: pledge.refundAmountMinor ?? pledge.amountMinor,
+          currency: pledge.currency,
+          reason: pledge.refundReason,
+          requestUrl: `${base()}/requests/${encodeURIComponent(pledge.requestId)}`,
+          independenceUrl: `${base()}/independence`,
         }),
       };
     },

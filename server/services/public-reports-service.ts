@@ -5,12 +5,12 @@
  */
 import { COMBINED_BAND } from '#shared/lab/band-values.ts';
 import type { ReportSnapshot } from '#shared/lab/report-snapshot.ts';
-import type { PublicReport, PublicReportSummary } from '#shared/schemas/reports.ts';
+import type { PublicReport, PublicReportSummary, ReportFunding } from '#shared/schemas/reports.ts';
 import { notFound } from '../core/app-error.ts';
 import type { ServiceDeps } from '../core/context.ts';
 import { reportsRepo } from '../db/repos/reports-repo.ts';
 import { createRenderedCache, type Rendered } from './rendered-cache.ts';
-import { publicView } from './report-view.ts';
+import { publicView, reportFunding } from './report-view.ts';
 
 const csvCell = (v: string | number | null) => (v === null ? '' : typeof v === 'number' ? String(Number(v.toPrecision(10))) : `"${v.replace(/"/g, '""')}"`);
 
@@ -36,14 +36,17 @@ export function createPublicReportsService(deps: Pick<ServiceDeps, 'db'>) {
   const rendered = createRenderedCache();
   // The report row behind a cached answer is re-read at most once a second per slug: under load
   // that spares the database nearly every query; this process's own writes call forget().
-  const recent = new Map<string, { report: Awaited<ReturnType<typeof load>>; at: number }>();
-  const loadRecent = async (slug: string) => {
+  // The funding line is read with it, at the same pace (it is live, not frozen with the figures).
+  type Recent = { report: Awaited<ReturnType<typeof load>>; funding: ReportFunding };
+  const recent = new Map<string, Recent & { at: number }>();
+  const loadRecent = async (slug: string): Promise<Recent> => {
     const hit = recent.get(slug);
-    if (hit && Date.now() - hit.at < RECHECK_MS) return hit.report;
+    if (hit && Date.now() - hit.at < RECHECK_MS) return hit;
     const report = await load(slug);
+    const funding = await reportFunding(deps.db, report.id);
     if (recent.size > 1000) recent.clear();
-    recent.set(slug, { report, at: Date.now() });
-    return report;
+    recent.set(slug, { report, funding, at: Date.now() });
+    return { report, funding };
   };
 
   const service = {
@@ -79,7 +82,7 @@ export function createPublicReportsService(deps: Pick<ServiceDeps, 'db'>) {
       const version = await reportsRepo.version(deps.db, report.id, v);
       if (!version) throw notFound('That version of the report');
       const versions = await reportsRepo.versionList(deps.db, report.id);
-      return publicView(report, version, versions, versions[0]?.publishedAt ?? version.publishedAt, baseUrl);
+      return publicView(report, version, versions, versions[0]?.publishedAt ?? version.publishedAt, baseUrl, await reportFunding(deps.db, report.id));
     },
 
     /** The index as JSON, serialised once per state of the public reports. */
@@ -90,8 +93,8 @@ export function createPublicReportsService(deps: Pick<ServiceDeps, 'db'>) {
 
     /** One report (or one version of it) as JSON, serialised once per state of that report. */
     async getRendered(slug: string, versionNumber: number | null, baseUrl: string): Promise<Rendered> {
-      const report = await loadRecent(slug);
-      const key = ['report', report.id, versionNumber ?? 'latest', report.status, report.currentVersion, report.updatedAt, baseUrl].join(':');
+      const { report, funding } = await loadRecent(slug);
+      const key = ['report', report.id, versionNumber ?? 'latest', report.status, report.currentVersion, report.updatedAt, baseUrl, JSON.stringify(funding)].join(':');
       return rendered.get(key, async () => ({ report: await service.get(slug, versionNumber, baseUrl) }));
     },
 

@@ -12,7 +12,7 @@ import { renderMarkdown } from '../reports/render-markdown.ts';
 import { audit } from './audit.ts';
 import { assertCan } from './permissions.ts';
 import { snapshotModel, snapshotRunInput } from './report-inputs.ts';
-import { publicView } from './report-view.ts';
+import { publicView, reportFunding } from './report-view.ts';
 
 /** `Corvane Photonics`, `Fenwick torso panel` → `corvane-photonics-fenwick-torso-panel`. */
 export function slugOf(...parts: string[]): string {
@@ -128,6 +128,7 @@ export function createReportsService(deps: Pick<ServiceDeps, 'db' | 'clock' | 'q
           [...versions, { version: report.currentVersion + 1, publishedAt: now, changeNote: null }],
           versions[0]?.publishedAt ?? now,
           '',
+          await reportFunding(deps.db, id),
         ),
         preview: true,
       };

@@ -12,6 +12,7 @@ import type { Caller } from '../core/caller.ts';
 import type { ServiceDeps } from '../core/context.ts';
 import type { Db } from '../db/knex.ts';
 import { subscribersRepo } from '../db/repos/subscribers-repo.ts';
+import { pledgesRepo } from '../db/repos/pledges-repo.ts';
 import { testRequestsRepo } from '../db/repos/test-requests-repo.ts';
 import { audit } from './audit.ts';
 import { readEmailToken, useEmailToken } from './email-token-check.ts';
@@ -52,8 +53,10 @@ export function createSubscriptionsService(deps: Pick<ServiceDeps, 'db' | 'clock
         await subscribersRepo.setChoices(trx, subscriber.id, { status: 'unsubscribed' }, now);
         await audit({ trx, clock: deps.clock, caller, action: 'subscriber.unsubscribe', entity: { type: 'subscriber', id: subscriber.id }, before: { status: subscriber.status }, after: { status: 'unsubscribed' } });
       }
-      // "Unsubscribe" stops every e-mail to readers at this address, votes' news included.
+      // "Unsubscribe" stops every e-mail to readers at this address, votes' and pledges' news included
+      // (a refund notice still goes: it is about the reader's money).
       await testRequestsRepo.setNotifyForAddress(trx, email, false);
+      await pledgesRepo.setNotifyForAddress(trx, email, false);
     });
   };
 

@@ -11,17 +11,19 @@ import { AppError, notFound, validationFailed } from '../core/app-error.ts';
 import { callerUser, type Caller } from '../core/caller.ts';
 import type { ServiceDeps } from '../core/context.ts';
 import type { Db } from '../db/knex.ts';
+import { pledgesRepo } from '../db/repos/pledges-repo.ts';
 import { reportsRepo } from '../db/repos/reports-repo.ts';
 import { testRequestsRepo } from '../db/repos/test-requests-repo.ts';
 import { audit } from './audit.ts';
 import { useEmailToken } from './email-token-check.ts';
+import { refundRequest } from './funding-steps.ts';
 import type { OutboxService } from './outbox-service.ts';
 import { assertCan } from './permissions.ts';
 import { takeReaderLimit } from './subscriptions-service.ts';
 
 const VOTABLE: readonly TestRequestStatus[] = ['open', 'planned'];
 
-export function createTestRequestsService(deps: Pick<ServiceDeps, 'db' | 'clock'>, outbox: OutboxService, limiter: ReaderLimiter) {
+export function createTestRequestsService(deps: Pick<ServiceDeps, 'db' | 'clock' | 'queue'>, outbox: OutboxService, limiter: ReaderLimiter) {
   const voteMail = (email: string, voteId: string, notify: boolean, newRequest: boolean) => ({
     recipient: email,
     purpose: `vote-confirm:${voteId}:${randomUUID()}`,
@@ -29,13 +31,19 @@ export function createTestRequestsService(deps: Pick<ServiceDeps, 'db' | 'clock'
     payload: { voteId, notify, newRequest },
   });
 
-  /** One e-mail per voter who asked, once per request (a second "tested" records nothing new). */
+  /**
+   * One e-mail per voter and backer who asked, once per request and address (a second "tested"
+   * records nothing new; a reader who voted and pledged gets one).
+   */
   const queueTestedMail = async (trx: Db, requestId: string) => {
     const voters = await testRequestsRepo.notifyVoters(trx, requestId);
-    return outbox.record(
-      trx,
-      voters.map((v) => ({ recipient: v.email, purpose: `request-tested:${requestId}`, kind: 'request_tested' as const, payload: { requestId, voteId: v.voteId } })),
-    );
+    const known = new Set(voters.map((v) => v.email.toLowerCase()));
+    const backers = (await pledgesRepo.notifyPledgers(trx, requestId)).filter((p) => !known.has(p.email.toLowerCase()));
+    const purpose = `request-tested:${requestId}`;
+    return outbox.record(trx, [
+      ...voters.map((v) => ({ recipient: v.email, purpose, kind: 'request_tested' as const, payload: { requestId, voteId: v.voteId } })),
+      ...backers.map((p) => ({ recipient: p.email, purpose, kind: 'request_tested' as const, payload: { requestId, pledgeId: p.pledgeId } })),
+    ]);
   };
 
   const labView = async (db: Db, id: string): Promise<LabTestRequest> => {
@@ -47,6 +55,13 @@ export function createTestRequestsService(deps: Pick<ServiceDeps, 'db' | 'clock'
   return {
     async listPublic(): Promise<PublicTestRequest[]> {
       return testRequestsRepo.listPublic(deps.db);
+    },
+
+    /** One listed request with its funding, for its own page. */
+    async getPublic(id: string): Promise<PublicTestRequest> {
+      const found = await testRequestsRepo.publicView(deps.db, id);
+      if (!found) throw notFound('That request');
+      return found;
     },
 
     /** A new request waits for its requester's confirmation before it is listed. Same answer always. */
@@ -119,6 +134,8 @@ export function createTestRequestsService(deps: Pick<ServiceDeps, 'db' | 'clock'
           { status: body.status, declineReason: body.status === 'declined' ? body.reason : null, reportId, triagedBy: callerUser(caller)?.id ?? null },
           now,
         );
+        // Declining gives every paid pledge back (one refund job each, in this transaction).
+        const refunds = body.status === 'declined' && before.status !== 'declined' ? await refundRequest(deps, trx, caller, id, `Declined: ${body.reason}`) : 0;
         // Voters hear now if the report is out, else when it is published (the reports hook).
         let queued = 0;
         if (reportId && (await reportsRepo.findById(trx, reportId))?.status === 'published') queued = await queueTestedMail(trx, id);
@@ -129,7 +146,7 @@ export function createTestRequestsService(deps: Pick<ServiceDeps, 'db' | 'clock'
           action: 'test_request.triage',
           entity: { type: 'test_request', id },
           before: { status: before.status },
-          after: { status: body.status, ...(body.status === 'declined' ? { reason: body.reason } : {}), ...(reportId ? { reportId, votersNotified: queued } : {}) },
+          after: { status: body.status, ...(body.status === 'declined' ? { reason: body.reason, refundsQueued: refunds } : {}), ...(reportId ? { reportId, votersNotified: queued } : {}) },
         });
       });
       return labView(deps.db, id);
@@ -150,6 +167,8 @@ export function createTestRequestsService(deps: Pick<ServiceDeps, 'db' | 'clock'
         if (!from || from.status === 'unconfirmed') throw notFound('That request');
         if (!into || into.status === 'unconfirmed') throw validationFailed([{ path: 'body.intoId', message: 'No such request.' }]);
         if (from.status === 'merged') throw new AppError('conflict', 'This request is merged already.');
+        // Pledges stay with the request readers paid toward: decline it (which refunds them) instead.
+        if ((await pledgesRepo.countLive(trx, id)) > 0) throw new AppError('conflict', 'This request has pledges; it cannot be merged away. Decline it instead: its pledges are then refunded.');
         if (into.status === 'merged') throw validationFailed([{ path: 'body.intoId', message: 'That request was itself merged; choose the one it was merged into.' }]);
         const moved = await testRequestsRepo.moveVotes(trx, id, intoId);
         await testRequestsRepo.repointMerged(trx, id, intoId, now);

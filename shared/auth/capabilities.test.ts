@@ -18,6 +18,11 @@ describe('capability map', () => {
     expect(can('editor', 'mail.manage')).toBe(false);
     expect(can('admin', 'mail.manage')).toBe(true);
   });
+  it('keeps the ledger for admins', () => {
+    expect(can('tester', 'ledger.read')).toBe(false);
+    expect(can('editor', 'ledger.read')).toBe(false);
+    expect(can('admin', 'ledger.read')).toBe(true);
+  });
   it('keeps user management for admins', () => {
     expect(can('tester', 'users.manage')).toBe(false);
     expect(can('editor', 'users.manage')).toBe(false);

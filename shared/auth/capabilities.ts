@@ -13,9 +13,10 @@ export const CAPABILITIES = [
   'runs.review', // request changes, approve (never a run one measured: a row-level rule)
   'reports.publish', // publish, correct, retract
   'users.manage', // invite staff, set roles, deactivate
-  'requests.triage', // readers' test requests: plan, decline, mark tested, merge
+  'requests.triage', // readers' test requests: plan, decline, mark tested, merge, set a funding goal
   'mail.manage', // the send log (and sending a failed message again); the mailbox while the local fake runs
   'settings.manage',
+  'ledger.read', // every payment, refund and fee; the CSV export and the reconciliation with the provider
 ] as const;
 export type Capability = (typeof CAPABILITIES)[number];
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { majorToMinor, minorDigits, minorToMajor } from './money.ts';
+import { formatMinorUnits, majorToMinor, minorDigits, minorToMajor } from './money.ts';
 
 // Minor-unit digits per currency: ISO 4217 (EUR 2, JPY 0, KWD 3), as Intl reports them.
 describe('money in minor units', () => {
@@ -28,5 +28,12 @@ describe('money in minor units', () => {
     expect(minorToMajor(12990, 'EUR')).toBe('129.90');
     expect(minorToMajor(7, 'EUR')).toBe('0.07');
     expect(minorToMajor(1299, 'JPY')).toBe('1299');
+  });
+
+  it('prints minor units as a price, negatives included (symbols as Intl/CLDR prints them for en-GB)', () => {
+    expect(formatMinorUnits(52999, 'EUR')).toBe('€529.99');
+    expect(formatMinorUnits(-500, 'EUR')).toBe('-€5.00');
+    expect(formatMinorUnits(1299, 'JPY')).toBe('JP¥1,299');
+    expect(formatMinorUnits(0, 'GBP')).toBe('£0.00');
   });
 });

@@ -38,3 +38,13 @@ export function minorToMajor(minor: number, currency: string): string {
   const sign = minor < 0 ? '-' : '';
   return digits === 0 ? sign + text : `${sign}${text.slice(0, -digits)}.${text.slice(-digits)}`;
 }
+
+/** 12999 EUR → "€129.99", −500 → "-€5.00": printed from the digits, not from a float. */
+export function formatMinorUnits(minor: number, currency: string): string {
+  const major = minorToMajor(minor, currency);
+  try {
+    return new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(major as Intl.StringNumericLiteral);
+  } catch {
+    return `${major} ${currency}`;
+  }
+}

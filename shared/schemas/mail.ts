@@ -8,6 +8,7 @@ export const MAIL_KINDS = [
   'request_tested',
   'invitation',
   'password_reset',
+  'pledge_refunded',
 ] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];
 
@@ -19,6 +20,7 @@ export const MAIL_KIND_LABELS: Readonly<Record<MailKind, string>> = {
   request_tested: 'Requested device tested',
   invitation: 'Staff invitation',
   password_reset: 'Password reset',
+  pledge_refunded: 'Pledge refunded',
 };
 
 export const OUTBOX_STATES = ['queued', 'sending', 'sent', 'failed', 'cancelled'] as const;

@@ -130,6 +130,23 @@ export const reportSnapshotSchema = z.object({
 });
 export type ReportSnapshotData = z.infer<typeof reportSnapshotSchema>;
 
+/**
+ * How the tested unit and its bench time were paid for: by readers' pledges toward requests
+ * marked tested with this report (paid, not refunded), or by the lab itself. Computed when asked,
+ * not frozen with the figures: a request may be marked tested after publication.
+ */
+export const reportFundingSchema = z.discriminatedUnion('kind', [
+  z.object({
+    kind: z.literal('readers'),
+    /** Distinct readers with a paid pledge. */
+    readers: z.number().int(),
+    /** What they paid, per currency (integer minor units). */
+    amounts: z.array(z.object({ amountMinor: z.number().int(), currency: z.string() })),
+  }),
+  z.object({ kind: z.literal('lab') }),
+]);
+export type ReportFunding = z.infer<typeof reportFundingSchema>;
+
 export const reportVersionInfoSchema = z.object({ version: z.number().int(), publishedAt: z.string(), changeNote: z.string().nullable() });
 
 /** GET /api/public/reports/:slug (and …/versions/:n): one published version. */
@@ -147,6 +164,7 @@ export const publicReportSchema = reportSnapshotSchema.extend({
   retracted: z.object({ at: z.string(), reason: z.string() }).nullable(),
   category: z.string(),
   citation: z.string(),
+  funding: reportFundingSchema,
   /** Only on a staff preview: the version that would be published. */
   preview: z.boolean().optional(),
 });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { requestFundingSchema } from './funding.ts';
 import { emailSchema } from './users.ts';
 
 export const TEST_REQUEST_STATUSES = ['unconfirmed', 'open', 'planned', 'declined', 'tested', 'merged'] as const;
@@ -56,9 +57,12 @@ export const publicTestRequestSchema = z.object({
   declineReason: z.string().nullable(),
   report: z.object({ slug: z.string(), title: z.string() }).nullable(),
   createdAt: z.string(),
+  /** The goal, what readers have paid toward it and who chose to be named. */
+  funding: requestFundingSchema,
 });
 export type PublicTestRequest = z.infer<typeof publicTestRequestSchema>;
 export const publicTestRequestListSchema = z.object({ requests: z.array(publicTestRequestSchema) });
+export const publicTestRequestResponseSchema = z.object({ request: publicTestRequestSchema });
 
 export const labTestRequestSchema = publicTestRequestSchema.extend({
   pendingVotes: z.number().int(),
@@ -68,6 +72,8 @@ export const labTestRequestSchema = publicTestRequestSchema.extend({
   triagedBy: z.string().nullable(),
   triagedAt: z.string().nullable(),
   updatedAt: z.string(),
+  /** Pledges still waiting for their payment (checkouts open at the provider). */
+  pendingPledges: z.number().int(),
 });
 export type LabTestRequest = z.infer<typeof labTestRequestSchema>;
 export const labTestRequestListSchema = z.object({ requests: z.array(labTestRequestSchema) });

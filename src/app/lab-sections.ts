@@ -38,6 +38,7 @@ export const LAB_SECTIONS: readonly LabSection[] = [
   { path: 'reports/:reportId', label: 'Report', capability: 'lab.enter', action: 'see reports', inNav: false, load: () => import('./routes/lab/report.tsx') },
   { path: 'requests', label: 'Test requests', capability: 'requests.triage', action: 'triage test requests', inNav: true, load: () => import('./routes/lab/test-requests.tsx') },
   { path: 'admin/users', label: 'Users', capability: 'users.manage', action: 'manage users', inNav: true, load: () => import('./routes/lab/users.tsx') },
+  { path: 'ledger', label: 'Ledger', capability: 'ledger.read', action: 'read the ledger', inNav: true, load: () => import('./routes/lab/ledger.tsx') },
   { path: 'admin/mail', label: 'Send log', capability: 'mail.manage', action: 'read the send log', inNav: true, load: () => import('./routes/lab/mail.tsx') },
   { path: 'admin/mailbox', label: 'Mailbox', capability: 'mail.manage', action: 'read the mailbox', inNav: true, shownWhen: 'fakeMailbox', load: () => import('./routes/lab/mailbox.tsx') },
 ];

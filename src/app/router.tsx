@@ -89,6 +89,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             { path: 'compare', lazy: () => import('./routes/public/compare.tsx').then(c) },
             { path: 'methodology', lazy: () => import('./routes/public/methodology.tsx').then(c) },
             { path: 'request', lazy: () => import('./routes/public/request.tsx').then(c) },
+            { path: 'requests/:id', lazy: () => import('./routes/public/request-detail.tsx').then(c) },
+            { path: 'independence', lazy: () => import('./routes/public/independence.tsx').then(c) },
             { path: 'subscribe', lazy: () => import('./routes/public/subscribe.tsx').then(c) },
             { path: 'subscribe/confirm', lazy: () => import('./routes/public/subscribe-confirm.tsx').then(c) },
             { path: 'subscribe/preferences', lazy: () => import('./routes/public/subscribe-preferences.tsx').then(c) },

@@ -159,4 +159,6 @@ export const api = {
     apiRequest<T>(path, { method: 'POST', body, schema }),
   patch: <T = void>(path: string, body?: unknown, schema?: z.ZodType<T>) =>
     apiRequest<T>(path, { method: 'PATCH', body, schema }),
+  put: <T = void>(path: string, body?: unknown, schema?: z.ZodType<T>) =>
+    apiRequest<T>(path, { method: 'PUT', body, schema }),
 };

@@ -82,6 +82,7 @@ export function aPublicReport(slug: string, opts: { title?: string; peakAt15?: n
     retracted: null,
     category: 'panel',
     citation: `Benchlight (2026). ${slug}.`,
+    funding: { kind: 'lab' as const },
     model: {
       name: slug,
       makerName: 'Aldermoor Light Co.',

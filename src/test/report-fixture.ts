@@ -87,6 +87,7 @@ export interface ReportFixtureOptions {
   version?: number;
   retracted?: { at: string; reason: string } | null;
   preview?: boolean;
+  funding?: PublicReport['funding'];
 }
 
 export const FIXTURE_SLUG = 'fixture-optics-lumen-test-panel';
@@ -122,6 +123,7 @@ export function reportFixture(options: ReportFixtureOptions = {}): PublicReport 
     citation: options.preview
       ? ''
       : `Benchlight independent test lab (2026). “Lumen test panel: even light at 30 cm”, version ${version}. https://bench.test/reports/${FIXTURE_SLUG}/versions/${version}`,
+    funding: options.funding ?? { kind: 'lab' },
     ...(options.preview ? { preview: true } : {}),
   };
 }

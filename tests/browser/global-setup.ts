@@ -1,8 +1,10 @@
 /**
  * Before the browser tests: a fresh database with the demo seed, the built client, and the
- * real server (on a free 127.0.0.1 port) and worker started. Chromium must exist (npm test installs it):
- * without it this fails rather than skipping.
+ * real server (on a free 127.0.0.1 port) and worker started, with mail going to a local fake SMTP
+ * server and payments to the local fake payment provider (both in this process, on loopback).
+ * Chromium must exist (npm test installs it): without it this fails rather than skipping.
  */
+import { randomUUID } from 'node:crypto';
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import net from 'node:net';
@@ -13,6 +15,7 @@ import { freshDatabase } from '#scripts/lib/fresh-database.ts';
 import { CHROMIUM_PATH } from '#scripts/lib/chromium.ts';
 import { buildClient, knexCli, ROOT, seedDemoData } from '#scripts/lib/run-step.ts';
 import { startFakeSmtp, type FakeSmtp } from '#server/mail/fake-smtp.ts';
+import { startFakePaymentProvider, type FakePaymentProvider } from '#server/payments/fake-provider/start-fake-provider.ts';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -20,6 +23,8 @@ declare module 'vitest' {
     chromiumPath: string;
     /** The folder where the local fake SMTP server writes every e-mail as an .eml file. */
     mailDir: string;
+    /** The local fake payment provider the server and the worker talk to (its /__fake controls). */
+    paymentsUrl: string;
   }
 }
 
@@ -54,6 +59,7 @@ async function waitHealthy(url: string, child: ChildProcess, log: () => string) 
 let server: ChildProcess | null = null;
 let worker: ChildProcess | null = null;
 let smtp: FakeSmtp | null = null;
+let payments: FakePaymentProvider | null = null;
 
 export default async function setup(project: TestProject) {
   if (!fs.existsSync(CHROMIUM_PATH)) {
@@ -73,18 +79,23 @@ export default async function setup(project: TestProject) {
   // E-mail goes to a local fake SMTP server, as in the demo; tests read its folder.
   smtp = await startFakeSmtp({ dir: fs.mkdtempSync(path.join(os.tmpdir(), 'benchlight-e2e-mail-')) });
   const mailEnv = { SMTP_URL: smtp.url, FAKE_MAILBOX_DIR: smtp.dir, PUBLIC_BASE_URL: `http://127.0.0.1:${port}` };
+  // Payments go to the local fake, as in the demo: it delivers signed webhooks to the server.
+  const secretKey = `sk_test_${randomUUID().replaceAll('-', '')}`;
+  const webhookSecret = `whsec_${randomUUID().replaceAll('-', '')}`;
+  payments = await startFakePaymentProvider({ host: '127.0.0.1', webhookUrl: `http://127.0.0.1:${port}/api/payments/webhook`, webhookSecret, secretKey });
+  const paymentEnv = { PAYMENTS_API_URL: payments.url, PAYMENTS_SECRET_KEY: secretKey, PAYMENTS_WEBHOOK_SECRET: webhookSecret };
   let output = '';
   server = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'main.ts')], {
     cwd: ROOT,
-    env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', DATABASE_URL: databaseUrl, SERVE_CLIENT: 'true', LOG_LEVEL: 'warn', ...mailEnv },
+    env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', DATABASE_URL: databaseUrl, SERVE_CLIENT: 'true', LOG_LEVEL: 'warn', ...mailEnv, ...paymentEnv },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   server.stdout?.on('data', (d) => (output += d));
   server.stderr?.on('data', (d) => (output += d));
-  // The worker analyses uploads, as in production.
+  // The worker analyses uploads, sends mail and refunds pledges, as in production.
   worker = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', 'worker.ts')], {
     cwd: ROOT,
-    env: { ...process.env, NODE_ENV: 'test', DATABASE_URL: databaseUrl, LOG_LEVEL: 'warn', ...mailEnv },
+    env: { ...process.env, NODE_ENV: 'test', DATABASE_URL: databaseUrl, LOG_LEVEL: 'warn', ...mailEnv, ...paymentEnv },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   worker.stdout?.on('data', (d) => (output += d));
@@ -95,6 +106,7 @@ export default async function setup(project: TestProject) {
   project.provide('baseUrl', baseUrl);
   project.provide('chromiumPath', CHROMIUM_PATH);
   project.provide('mailDir', smtp.dir);
+  project.provide('paymentsUrl', payments.url);
 
   return async () => {
     for (const child of [server, worker]) {
@@ -103,6 +115,7 @@ export default async function setup(project: TestProject) {
         await new Promise((r) => child.once('exit', r));
       }
     }
+    await payments?.close();
     if (smtp) {
       await smtp.close();
       fs.rmSync(smtp.dir, { recursive: true, force: true });

@@ -8,7 +8,7 @@ const EXPECTED_NAV: Record<string, string[]> = {
   tester: ['Overview', 'Runs', 'File check', 'Catalog', 'Reports'],
   editor: ['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Test requests'],
   // The browser tests send mail to the local fake SMTP server, so the Mailbox is there.
-  admin: ['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Test requests', 'Users', 'Send log', 'Mailbox'],
+  admin: ['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Test requests', 'Users', 'Ledger', 'Send log', 'Mailbox'],
 };
 
 describe('staff area in Chromium, per role', () => {

@@ -68,6 +68,24 @@ describe('the payment provider module against the local fake', () => {
     });
   });
 
+  it('reads a payment with its charge and the balance transaction that holds the fee', async () => {
+    const created = await t.payments.createCheckout(checkoutInput({ amountMinor: 2500, metadata: { pledge_id: 'p-1' } }));
+    const { paymentIntentId: unpaid } = await t.payments.retrieveCheckout(created.id);
+    expect(unpaid).toBeNull();
+    await submitHostedPage(created.url, 'pay');
+    const { paymentIntentId } = await t.payments.retrieveCheckout(created.id);
+    const details = await t.payments.retrievePayment(paymentIntentId!);
+    // The fake's fee rule: 1.5 % of 2500 = 37.5, half up 38, + 25 = 63 (docs/payments.md, computed).
+    expect(details).toEqual({
+      paymentIntentId,
+      status: 'succeeded',
+      chargeId: expect.stringMatching(/^ch_/),
+      balanceTransaction: { id: expect.stringMatching(/^txn_/), type: 'charge', amountMinor: 2500, feeMinor: 63, netMinor: 2437, currency: 'EUR', sourceId: details.chargeId, created: expect.any(Date) },
+      metadata: { pledge_id: 'p-1' },
+    });
+    await expect(t.payments.retrievePayment('pi_missing')).rejects.toMatchObject({ code: 'payment_provider_error', details: { providerCode: 'resource_missing' } });
+  });
+
   it('refunds once for one idempotency key: one refund, one balance transaction', async () => {
     const created = await t.payments.createCheckout(checkoutInput({ amountMinor: 4000 }));
     await submitHostedPage(created.url, 'pay');
@@ -77,7 +95,7 @@ describe('the payment provider module against the local fake', () => {
     const key = `refund-${created.id}`;
     const first = await t.payments.refund({ paymentIntentId: paymentIntentId!, idempotencyKey: key, reason: 'requested_by_customer' });
     const second = await t.payments.refund({ paymentIntentId: paymentIntentId!, idempotencyKey: key, reason: 'requested_by_customer' });
-    expect(first).toEqual({ id: expect.stringMatching(/^re_/), status: 'succeeded', amountMinor: 4000, currency: 'EUR' });
+    expect(first).toEqual({ id: expect.stringMatching(/^re_/), status: 'succeeded', amountMinor: 4000, currency: 'EUR', created: expect.any(Date) });
     expect(second).toEqual(first);
 
     const after = await t.payments.balanceTransactions();

@@ -1,6 +1,9 @@
 import type { Knex } from 'knex';
+import { fundingGoal, refundDeadline, summarizeBackers, type Backers } from '#shared/funding/funding-math.ts';
+import type { RequestFunding } from '#shared/schemas/funding.ts';
 import type { LabTestRequest, PublicTestRequest, TestRequestStatus } from '#shared/schemas/test-requests.ts';
 import { iso } from './list-page.ts';
+import { pledgesRepo } from './pledges-repo.ts';
 
 export interface TestRequestRecord {
   id: string;
@@ -9,7 +12,26 @@ export interface TestRequestRecord {
   status: TestRequestStatus;
   reportId: string | null;
   mergedInto: string | null;
+  declineReason: string | null;
+  /** The unit's price and the bench day as set by an editor, or null before a goal is set. */
+  goal: { unitPriceMinor: number; benchDayMinor: number; currency: string } | null;
+  goalReachedAt: Date | null;
 }
+
+const toRecord = (r: any): TestRequestRecord => ({
+  id: r.id,
+  maker: r.maker,
+  model: r.model,
+  status: r.status,
+  reportId: r.report_id,
+  mergedInto: r.merged_into,
+  declineReason: r.decline_reason,
+  goal: r.goal_unit_price_minor === null ? null : { unitPriceMinor: Number(r.goal_unit_price_minor), benchDayMinor: Number(r.goal_bench_day_minor), currency: r.goal_currency },
+  goalReachedAt: r.goal_reached_at ? new Date(r.goal_reached_at) : null,
+});
+
+/** Requests that take pledges (and votes). */
+export const FUNDABLE_STATUSES: readonly TestRequestStatus[] = ['open', 'planned'];
 
 export interface VoteRecord {
   id: string;
@@ -26,8 +48,13 @@ function listQuery(db: Knex) {
   return db('test_requests as t')
     .leftJoin('reports as r', 'r.id', 't.report_id')
     .leftJoin('users as u', 'u.id', 't.triaged_by')
+    .leftJoin('request_funding as f', 'f.request_id', 't.id')
     .select(
       't.*',
+      'f.raised_minor',
+      'f.backers',
+      'f.refunds_under_way',
+      'f.pending_pledges',
       'r.slug as report_slug',
       'r.status as report_status',
       db.raw('(select v.title from report_versions v where v.report_id = r.id and v.version = r.current_version) as report_title'),
@@ -39,7 +66,31 @@ function listQuery(db: Knex) {
     );
 }
 
-function toPublic(r: any): PublicTestRequest {
+function fundingOf(r: any, backers: Backers): RequestFunding {
+  const goal = r.goal_unit_price_minor === null ? null : fundingGoal(Number(r.goal_unit_price_minor), Number(r.goal_bench_day_minor), r.goal_currency);
+  const reachedAt = r.goal_reached_at ? new Date(r.goal_reached_at) : null;
+  return {
+    goal,
+    raisedMinor: Number(r.raised_minor ?? 0),
+    backers: Number(r.backers ?? 0),
+    names: backers.names,
+    anonymousBackers: backers.anonymous,
+    goalReachedAt: reachedAt ? reachedAt.toISOString() : null,
+    refundBy: reachedAt ? refundDeadline(reachedAt).toISOString() : null,
+    refundsUnderWay: Number(r.refunds_under_way ?? 0),
+    open: goal !== null && !reachedAt && FUNDABLE_STATUSES.includes(r.status),
+  };
+}
+
+/** The named and anonymous backers of each row, from their paid pledges. */
+async function backersByRequest(db: Knex, rows: any[]): Promise<Map<string, Backers>> {
+  const paid = await pledgesRepo.paidOf(db, rows.filter((r) => Number(r.backers ?? 0) > 0).map((r) => r.id));
+  const byRequest = new Map<string, typeof paid>();
+  for (const p of paid) byRequest.set(p.requestId, [...(byRequest.get(p.requestId) ?? []), p]);
+  return new Map(rows.map((r) => [r.id, summarizeBackers(byRequest.get(r.id) ?? [])]));
+}
+
+function toPublic(r: any, backers: Backers): PublicTestRequest {
   return {
     id: r.id,
     maker: r.maker,
@@ -52,12 +103,13 @@ function toPublic(r: any): PublicTestRequest {
     // Readers see the report only once it is public.
     report: r.report_slug && r.report_status === 'published' ? { slug: r.report_slug, title: r.report_title ?? r.report_draft_title } : null,
     createdAt: iso(r.created_at)!,
+    funding: fundingOf(r, backers),
   };
 }
 
-function toLab(r: any): LabTestRequest {
+function toLab(r: any, backers: Backers): LabTestRequest {
   return {
-    ...toPublic(r),
+    ...toPublic(r, backers),
     report: r.report_slug ? { slug: r.report_slug, title: r.report_title ?? r.report_draft_title } : null,
     pendingVotes: Number(r.pending_votes),
     notifyVotes: Number(r.notify_votes),
@@ -66,8 +118,16 @@ function toLab(r: any): LabTestRequest {
     triagedBy: r.triaged_by_name ?? null,
     triagedAt: iso(r.triaged_at),
     updatedAt: iso(r.updated_at)!,
+    pendingPledges: Number(r.pending_pledges ?? 0),
   };
 }
+
+async function mapRows<T>(db: Knex, rows: any[], map: (r: any, b: Backers) => T): Promise<T[]> {
+  const backers = await backersByRequest(db, rows);
+  return rows.map((r) => map(r, backers.get(r.id)!));
+}
+
+const LISTED: readonly TestRequestStatus[] = ['open', 'planned', 'declined', 'tested'];
 
 export const testRequestsRepo = {
   async insert(db: Knex, r: { id: string; maker: string; model: string; link: string; reason: string; now: Date }): Promise<void> {
@@ -78,24 +138,54 @@ export const testRequestsRepo = {
     const q = db('test_requests').where({ id });
     if (opts.lock) q.forUpdate();
     const r = await q.first();
-    return r ? { id: r.id, maker: r.maker, model: r.model, status: r.status, reportId: r.report_id, mergedInto: r.merged_into } : null;
+    return r ? toRecord(r) : null;
   },
 
   /** Listed requests, most votes first, then the oldest. */
   async listPublic(db: Knex): Promise<PublicTestRequest[]> {
-    const rows = await listQuery(db).whereIn('t.status', ['open', 'planned', 'declined', 'tested']).orderBy([{ column: 'votes', order: 'desc' }, { column: 't.created_at', order: 'asc' }]);
-    return rows.map(toPublic);
+    const rows = await listQuery(db).whereIn('t.status', LISTED as TestRequestStatus[]).orderBy([{ column: 'votes', order: 'desc' }, { column: 't.created_at', order: 'asc' }]);
+    return mapRows(db, rows, toPublic);
+  },
+
+  /** One listed request as readers see it; null for an unconfirmed, merged or unknown one. */
+  async publicView(db: Knex, id: string): Promise<PublicTestRequest | null> {
+    const r = await listQuery(db).where('t.id', id).whereIn('t.status', LISTED as TestRequestStatus[]).first();
+    return r ? (await mapRows(db, [r], toPublic))[0] : null;
   },
 
   async listLab(db: Knex, status?: TestRequestStatus): Promise<LabTestRequest[]> {
     const q = listQuery(db).orderBy([{ column: 'votes', order: 'desc' }, { column: 't.created_at', order: 'asc' }]);
     if (status) q.where('t.status', status);
-    return (await q).map(toLab);
+    return mapRows(db, await q, toLab);
   },
 
   async labView(db: Knex, id: string): Promise<LabTestRequest | null> {
     const r = await listQuery(db).where('t.id', id).first();
-    return r ? toLab(r) : null;
+    return r ? (await mapRows(db, [r], toLab))[0] : null;
+  },
+
+  /** An editor's goal: the unit's price and one bench day, in the lab's currency. */
+  async setGoal(db: Knex, id: string, g: { unitPriceMinor: number; benchDayMinor: number; currency: string; setBy: string | null }, now: Date): Promise<void> {
+    await db('test_requests')
+      .where({ id })
+      .update({ goal_unit_price_minor: g.unitPriceMinor, goal_bench_day_minor: g.benchDayMinor, goal_currency: g.currency, goal_set_by: g.setBy, goal_set_at: now, updated_at: now });
+  },
+
+  /** Records when the goal was reached, once; true when this call recorded it. */
+  async markGoalReached(db: Knex, id: string, at: Date): Promise<boolean> {
+    const n = await db('test_requests').where({ id }).whereNull('goal_reached_at').whereNotNull('goal_unit_price_minor').update({ goal_reached_at: at, updated_at: at });
+    return n > 0;
+  },
+
+  /** The money went back: the next time the goal is reached starts a new 180 days. */
+  async clearGoalReached(db: Knex, id: string, now: Date): Promise<void> {
+    await db('test_requests').where({ id }).whereNotNull('goal_reached_at').update({ goal_reached_at: null, updated_at: now });
+  },
+
+  /** Open or planned requests whose goal was reached at or before `reachedBefore` (not tested in time). */
+  async lapsed(db: Knex, reachedBefore: Date): Promise<string[]> {
+    const rows = await db('test_requests').whereIn('status', FUNDABLE_STATUSES as TestRequestStatus[]).where('goal_reached_at', '<=', reachedBefore).orderBy('goal_reached_at').select('id');
+    return rows.map((r) => r.id as string);
   },
 
   async setStatus(

@@ -50,23 +50,27 @@ If it was not you, ignore this e-mail.`,
   return { subject, html, text, headers: listHeaders(i.reader) };
 }
 
-/** To a voter who asked to hear: the requested device has a published report. */
-export function requestTestedMail(i: { device: string; reportTitle: string; reportUrl: string; reader: ReaderLinks }): ComposedMail {
+/** To a voter or a backer who asked to hear: the requested device has a published report. */
+export function requestTestedMail(i: { device: string; as: 'voter' | 'backer'; reportTitle: string; reportUrl: string; reader: ReaderLinks }): ComposedMail {
   const subject = `Tested: ${i.device}`;
+  const what = i.as === 'backer' ? `You helped pay for testing the ${i.device}.` : `You voted for testing the ${i.device}.`;
   const { html, text } = frame({
     title: subject,
     bodyHtml: `<h1 style="margin:0 0 12px;font-size:22px">We tested the ${escapeHtml(i.device)}</h1>
-${paragraph(`You voted for testing the ${i.device}. Its report is out: “${i.reportTitle}”.`)}
+${paragraph(`${what} Its report is out: “${i.reportTitle}”.`)}
 ${button(i.reportUrl, 'Read the report')}
 ${paragraph('Results are measurements of devices, not treatment advice; the report prints the cautions beside every figure.')}`,
     bodyText: `We tested the ${i.device}
 
-You voted for testing the ${i.device}. Its report is out: "${i.reportTitle}".
+${what} Its report is out: "${i.reportTitle}".
 
 Read the report: ${i.reportUrl}
 
 Results are measurements of devices, not treatment advice; the report prints the cautions beside every figure.`,
-    why: 'You get this because you voted for this test request and asked to hear when it is tested.',
+    why:
+      i.as === 'backer'
+        ? 'You get this because you pledged toward this test request and asked to hear when it is tested.'
+        : 'You get this because you voted for this test request and asked to hear when it is tested.',
     reader: i.reader,
   });
   return { subject, html, text, headers: listHeaders(i.reader) };

@@ -283,6 +283,30 @@ export function createFakeLedger(ctx: LedgerContext) {
       return wire(refund);
     },
 
+    /**
+     * A payment intent as the provider answers it; `expand` may name `latest_charge` and
+     * `latest_charge.balance_transaction`, which are then objects instead of ids.
+     */
+    paymentIntentAnswer(id: string, q: Params) {
+      const pi = state.paymentIntents[id];
+      if (!pi) throw noSuch('payment_intent', id, 'intent');
+      const expand = Array.isArray(q.expand) ? q.expand.map(String) : typeof q.expand === 'string' ? [q.expand] : [];
+      for (const path of expand) {
+        if (path !== 'latest_charge' && path !== 'latest_charge.balance_transaction') throw invalid('expand', `the fake cannot expand "${path}".`);
+      }
+      const answer = wire(pi);
+      const charge = pi.latest_charge ? state.charges[pi.latest_charge] : undefined;
+      if (charge && expand.some((p) => p.startsWith('latest_charge'))) {
+        const chargeAnswer = wire(charge);
+        if (expand.includes('latest_charge.balance_transaction')) {
+          const txn = state.balanceTransactions.find((t) => t.id === charge.balance_transaction);
+          if (txn) chargeAnswer.balance_transaction = wire(txn);
+        }
+        answer.latest_charge = chargeAnswer;
+      }
+      return answer;
+    },
+
     listBalanceTransactions(q: Params) {
       const created = (q.created ?? {}) as Params;
       const gte = created.gte === undefined ? null : integerParam(created.gte, 'created[gte]', 0);

@@ -164,6 +164,7 @@ export async function startFakePaymentProvider(options: FakePaymentProviderOptio
   api.post('/checkout/sessions', handle((req) => ledger.createSession(req.body ?? {})));
   api.get('/checkout/sessions/:id', handle((req) => ledger.sessionAnswer(ledger.findSession(String(req.params.id)))));
   api.post('/checkout/sessions/:id/expire', handle((req, key) => ledger.expireSession(String(req.params.id), key)));
+  api.get('/payment_intents/:id', handle((req) => ledger.paymentIntentAnswer(String(req.params.id), req.query as Record<string, unknown>)));
   api.post('/refunds', handle((req, key) => ledger.refund(req.body ?? {}, key)));
   api.get('/balance_transactions', handle((req) => ledger.listBalanceTransactions(req.query as Record<string, unknown>)));
   api.use((req, res) => {

@@ -20,6 +20,7 @@ import { registerJobHandlers } from '#server/job-handlers.ts';
 import { createPaymentProvider } from '#server/payments/create-payment-provider.ts';
 import { startFakePaymentProvider, type FakePaymentProvider } from '#server/payments/fake-provider/start-fake-provider.ts';
 import type { PaymentEventHandlers } from '#server/services/payment-events-service.ts';
+import type { Clock } from '#server/core/context.ts';
 
 export interface TestAppOptions {
   /** Run the worker's job handlers in this process. */
@@ -33,6 +34,8 @@ export interface TestAppOptions {
   paymentEventHandlers?: PaymentEventHandlers;
   /** Another mailer (e.g. real SMTP to the local fake); default: collected in memory in `sent`. */
   mailer?: Mailer;
+  /** The app's and the services' clock (a test moves it to reach a deadline); default: the real time. */
+  clock?: Clock;
 }
 
 /**
@@ -77,7 +80,7 @@ export async function makeTestApp(
   const logger = pino({ level: 'silent' });
   // The real queue in the test database: uploads queue their jobs; tests run them with runJobs().
   const queue = await startJobQueue({ databaseUrl, logger, supervise: false });
-  const clock = { now: () => new Date() };
+  const clock: Clock = options.clock ?? { now: () => new Date() };
   const app = createApp({ config, db, mailer, clock, logger, queue, payments, paymentEventHandlers: options.paymentEventHandlers });
   const sessions = createSessionAuth(db.pool);
   const services = createServices({

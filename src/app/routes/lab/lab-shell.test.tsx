@@ -22,8 +22,8 @@ describe('lab shell', () => {
     expect(await labNavItems(people.editor)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Test requests']);
   });
 
-  it('shows an admin Users and the Send log as well', async () => {
-    expect(await labNavItems(people.admin)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Test requests', 'Users', 'Send log']);
+  it('shows an admin Users, the Ledger and the Send log as well', async () => {
+    expect(await labNavItems(people.admin)).toEqual(['Overview', 'Runs', 'File check', 'Catalog', 'Review', 'Reports', 'Test requests', 'Users', 'Ledger', 'Send log']);
   });
 
   it('shows an admin the Mailbox only while the server says mail goes to the local fake', async () => {

@@ -46,6 +46,14 @@ describe('public shell', () => {
     }
   });
 
+  it('marks the section of the page in the main navigation', async () => {
+    stubFetch({ 'GET /api/public/test-requests': { body: { requests: [] } } });
+    renderApp('/request');
+    expect((await screen.findByRole('heading', { level: 1 })).textContent).toBe('Which device should we test next?');
+    const current = within(screen.getByRole('navigation', { name: 'Main' })).getByRole('link', { name: 'Request a test' });
+    expect(current.getAttribute('aria-current')).toBe('page');
+  });
+
   it('shows "Page not found" with a link home for an unknown path', async () => {
     stubFetch({});
     renderApp('/no/such/page');

@@ -160,6 +160,23 @@ describe('public report page', { timeout: 30_000 }, () => {
     expect((screen.getByRole('textbox', { name: 'Shoulder width (in)' }) as HTMLInputElement).value).toBe('16.5');
   });
 
+  it('says in the unit section who paid for the test: readers, with how many and how much, or the lab', async () => {
+    stubFetch({ [`GET ${latestPath}`]: { body: { report: reportFixture({ funding: { kind: 'readers', readers: 12, amounts: [{ amountMinor: 52999, currency: 'EUR' }] } }) } } });
+    renderApp(`/reports/${FIXTURE_SLUG}`);
+    await screen.findByRole('heading', { level: 2, name: 'The unit and how it was measured' }, SLOW);
+    const unit = sectionByHeading('The unit and how it was measured');
+    const term = within(unit).getByText('Who paid for the test');
+    expect(term.nextElementSibling?.textContent).toBe('Funded by 12 readers (€529.99). Who pays for our tests');
+    expect(within(unit).getByRole('link', { name: 'Who pays for our tests' }).getAttribute('href')).toBe('/independence');
+  });
+
+  it('says "Bought by the lab" when no reader paid toward it', async () => {
+    stubFetch({ [`GET ${latestPath}`]: { body: { report: reportFixture() } } });
+    renderApp(`/reports/${FIXTURE_SLUG}`);
+    await screen.findByRole('heading', { level: 2, name: 'The unit and how it was measured' }, SLOW);
+    expect(within(sectionByHeading('The unit and how it was measured')).getByText('Who paid for the test').nextElementSibling?.textContent).toBe('Bought by the lab. Who pays for our tests');
+  });
+
   it('keeps a retracted report readable under a banner with the date and the reason', async () => {
     stubFetch({
       [`GET ${latestPath}`]: {

@@ -5,6 +5,8 @@ import { Spinner } from '#src/components/spinner.tsx';
 import { testRequestsQueryOptions, useTestRequests } from '#src/features/test-requests/api/get-test-requests.ts';
 import { RequestForm } from '#src/features/test-requests/components/request-form.tsx';
 import { RequestList } from '#src/features/test-requests/components/request-list.tsx';
+import { FundingProgress } from '#src/features/funding/components/funding-progress.tsx';
+import { Link } from 'react-router-dom';
 
 export const clientLoader = (queryClient: QueryClient) => async () => {
   void queryClient.prefetchQuery(testRequestsQueryOptions());
@@ -18,7 +20,12 @@ export default function RequestRoute() {
       <PageHeader
         eyebrow="Request a test"
         title="Which device should we test next?"
-        description="Ask for a device, or vote for one already asked for. Votes count once confirmed by e-mail, one per address."
+        description={
+          <>
+            Ask for a device, or vote for one already asked for. Votes count once confirmed by e-mail, one per address. Readers pay for the tests they ask for,
+            never makers: <Link to="/independence">who pays for our tests</Link>.
+          </>
+        }
       />
       <div className="grid gap-section lg:grid-cols-[3fr_2fr]">
         <section aria-labelledby="requests-heading">
@@ -30,7 +37,7 @@ export default function RequestRoute() {
           ) : requests.isError ? (
             <ErrorState inline title="The requests could not be loaded" error={requests.error} onRetry={() => void requests.refetch()} />
           ) : (
-            <RequestList requests={requests.data} />
+            <RequestList requests={requests.data} funding={(r) => <FundingProgress funding={r.funding} compact />} />
           )}
         </section>
         <div>

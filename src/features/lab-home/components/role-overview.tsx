@@ -9,9 +9,10 @@ const CAPABILITY_TEXT: Record<Capability, string> = {
   'runs.review': 'Review submitted runs: request changes or approve (never a run you measured).',
   'reports.publish': 'Publish reports, and correct or retract them with a note.',
   'users.manage': 'Invite staff, set their roles, deactivate and reactivate accounts.',
-  'requests.triage': 'Triage readers’ test requests: plan, decline with a reason, mark tested with the report, merge near-duplicates.',
+  'requests.triage': 'Triage readers’ test requests: set a funding goal, plan, decline with a reason (pledges are refunded), mark tested with the report, merge near-duplicates.',
   'mail.manage': 'Read the send log of every e-mail, send a failed one again, and open the demo mailbox.',
   'settings.manage': 'Change site settings.',
+  'ledger.read': 'Read the ledger of readers’ payments, refunds and fees, export it, and reconcile it with the payment provider’s balance.',
 };
 
 export function RoleOverview({ role }: { role: Role }) {

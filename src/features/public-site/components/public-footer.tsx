@@ -12,7 +12,7 @@ export function PublicFooter() {
           Benchlight publishes measurements, not medical advice.
         </p>
         <p className="font-sans text-xs text-ink-muted">
-          Benchlight · an independent test lab · <Link to="/methodology">How we measure</Link>
+          Benchlight · an independent test lab · <Link to="/methodology">How we measure</Link> · <Link to="/independence">Who pays for our tests</Link>
         </p>
       </div>
     </footer>

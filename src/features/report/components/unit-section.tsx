@@ -28,6 +28,13 @@ function Facts({ label, items }: { label: string; items: { term: string; value: 
   );
 }
 
+/** "Funded by 2 readers (€500.00)" or "Bought by the lab". */
+export function fundingText(f: PublicReport['funding']): string {
+  if (f.kind === 'lab') return 'Bought by the lab';
+  const amounts = f.amounts.map((a) => formatMoney(a.amountMinor, a.currency)).join(' + ');
+  return `Funded by ${formatCount(f.readers)} ${f.readers === 1 ? 'reader' : 'readers'}${amounts ? ` (${amounts})` : ''}`;
+}
+
 const obtainedLabel = (o: string) => OBTAINED_LABELS[o as keyof typeof OBTAINED_LABELS] ?? o;
 const orDash = (v: string | number | null | undefined, unit = '') => (v === null || v === undefined ? '—' : `${v}${unit}`);
 
@@ -77,6 +84,14 @@ export function UnitSection({ report }: { report: PublicReport }) {
             },
             ...(m.powerW === null ? [] : [{ term: 'Stated power', value: `${formatTick(m.powerW)} W` }]),
             { term: 'Price', value: m.price ? formatMoney(m.price.amountMinor, m.price.currency) : '—' },
+            {
+              term: 'Who paid for the test',
+              value: (
+                <>
+                  {fundingText(report.funding)}. <Link to="/independence">Who pays for our tests</Link>
+                </>
+              ),
+            },
           ]}
         />
         <div className="space-y-6">

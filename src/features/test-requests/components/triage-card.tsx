@@ -1,4 +1,4 @@
-import { useId, useState, type FormEvent } from 'react';
+import { useId, useState, type FormEvent, type ReactNode } from 'react';
 import { TEST_REQUEST_STATUS_LABELS, triageBodySchema, type LabTestRequest } from '#shared/schemas/test-requests.ts';
 import { Alert } from '#src/components/alert.tsx';
 import { Button } from '#src/components/button.tsx';
@@ -17,8 +17,11 @@ const DECISIONS: { value: Decision; label: string }[] = [
   { value: 'tested', label: 'Tested (with the report)' },
 ];
 
-/** One request for an editor: its votes, and the decision (with a reason or the report), or a merge. */
-export function TriageCard({ request, others, reports }: { request: LabTestRequest; others: readonly LabTestRequest[]; reports: readonly { id: string; label: string }[] }) {
+/**
+ * One request for an editor: its votes, and the decision (with a reason or the report), or a
+ * merge; `children` is what the page adds (the funding and its goal).
+ */
+export function TriageCard({ request, others, reports, children }: { request: LabTestRequest; others: readonly LabTestRequest[]; reports: readonly { id: string; label: string }[]; children?: ReactNode }) {
   const triage = useTriageTestRequest();
   const merge = useMergeTestRequest();
   const headingId = useId();
@@ -28,6 +31,8 @@ export function TriageCard({ request, others, reports }: { request: LabTestReque
   const [reportId, setReportId] = useState(request.reportId ?? '');
   const [intoId, setIntoId] = useState('');
   const [error, setError] = useState<string | undefined>();
+  // Known when the decision is sent: the answer may come after the refunds are already done.
+  const [refunding, setRefunding] = useState(false);
   const device = `${request.maker} ${request.model}`;
 
   const onSave = (e: FormEvent) => {
@@ -38,6 +43,7 @@ export function TriageCard({ request, others, reports }: { request: LabTestReque
       return;
     }
     setError(undefined);
+    setRefunding(parsed.data.status === 'declined' && request.status !== 'declined' && request.funding.backers > 0);
     triage.mutate({ id: request.id, body: parsed.data });
   };
 
@@ -60,13 +66,28 @@ export function TriageCard({ request, others, reports }: { request: LabTestReque
         </a>
         {request.triagedBy && request.triagedAt ? ` · last decision by ${request.triagedBy}, ${formatDate(request.triagedAt)}` : ''}
       </p>
+      {children ? <div className="mt-4 border-t border-rule pt-4">{children}</div> : null}
       {request.status === 'merged' || request.status === 'unconfirmed' ? null : (
         <div className="mt-4 grid gap-6 lg:grid-cols-2">
           <form onSubmit={onSave} noValidate className="space-y-3" aria-label={`Decision on the ${device}`}>
-            {triage.isSuccess ? <Alert tone="success">Saved{triage.data.status === 'tested' && triage.data.report ? '. Voters who asked are e-mailed once the report is published.' : '.'}</Alert> : null}
+            {triage.isSuccess ? (
+              <Alert tone="success">
+                Saved
+                {triage.data.status === 'tested' && triage.data.report
+                  ? '. Voters and backers who asked are e-mailed once the report is published.'
+                  : triage.data.status === 'declined' && refunding
+                    ? '. Every paid pledge is being refunded; each backer gets an e-mail.'
+                    : '.'}
+              </Alert>
+            ) : null}
             <SaveError error={triage.error} what="The decision" />
             <SelectField label="Decision" options={DECISIONS} value={decision} onChange={(e) => setDecision(e.target.value as Decision)} />
             {decision === 'declined' ? <TextAreaField label="Reason readers will see" rows={2} value={reason} onChange={(e) => setReason(e.target.value)} error={error} /> : null}
+            {decision === 'declined' && request.status !== 'declined' && request.funding.backers > 0 ? (
+              <p className="font-sans text-sm">
+                Declining refunds every paid pledge automatically ({formatCount(request.funding.backers)} {request.funding.backers === 1 ? 'backer' : 'backers'}); each backer gets an e-mail.
+              </p>
+            ) : null}
             {decision === 'tested' ? (
               <SelectField label="Report" options={[{ value: '', label: 'Choose the report…' }, ...reports.map((r) => ({ value: r.id, label: r.label }))]} value={reportId} onChange={(e) => setReportId(e.target.value)} error={error} />
             ) : null}
