@@ -133,7 +133,8 @@ describe('the lab workflow in Chromium, against the real server, worker and data
       await e.getByRole('button', { name: /^30 cm, x 0, y 0:/ }).click();
       await e.getByLabel('Add a comment').fill('The 30 cm centre reads low against its neighbours; measure it again.');
       await e.getByRole('button', { name: 'Add comment' }).click();
-      await e.getByText('The 30 cm centre reads low against its neighbours; measure it again.').waitFor();
+      // The posted comment (the box may still hold the text a moment while it clears).
+      await e.locator('p').filter({ hasText: 'The 30 cm centre reads low against its neighbours; measure it again.' }).waitFor();
       await e.getByLabel('Note (needed to send it back)').fill('Re-measure the 30 cm centre.');
       await e.getByRole('button', { name: 'Request changes' }).click();
       await e.getByText('Sent back to the tester with your note.').waitFor();
