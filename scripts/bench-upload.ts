@@ -9,7 +9,6 @@
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { readFileSync } from 'node:fs';
-import net from 'node:net';
 import path from 'node:path';
 import { connect } from '#server/connect.ts';
 import { systemCaller } from '#server/core/caller.ts';
@@ -17,20 +16,10 @@ import { buildDemoScenario, demoGrid } from '#seeds/demo/scenario.ts';
 import { DEMO_UNITS } from '#seeds/demo/catalog.ts';
 import { freshDatabase } from './lib/fresh-database.ts';
 import { knexCli, ROOT } from './lib/run-step.ts';
+import { freePort } from './lib/free-port.ts';
 
 const TARGET_S = 10;
 const SCALE = 10;
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const port = (srv.address() as net.AddressInfo).port;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
 
 function child(file: string, env: Record<string, string>): ChildProcess {
   const c = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'server', file)], { cwd: ROOT, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });

@@ -14,7 +14,6 @@
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
@@ -23,22 +22,12 @@ import { chromium } from 'playwright-core';
 import { ensureChromium } from './lib/chromium.ts';
 import { freshDatabase } from './lib/fresh-database.ts';
 import { buildClient, knexCli, ROOT, seedDemoData } from './lib/run-step.ts';
+import { freePort } from './lib/free-port.ts';
 
 const PAGE_BUDGET_KB = 200;
 const P95_BUDGET_MS = 50;
 const CONNECTIONS = 50;
 const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 10);
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const port = (srv.address() as net.AddressInfo).port;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
 
 function startChild(args: string[], env: Record<string, string>): ChildProcess {
   const c = spawn(process.execPath, args, { cwd: ROOT, env: { ...process.env, ...env }, stdio: ['ignore', 'ignore', 'pipe'] });

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { ZodType } from 'zod';
 import { deviceUnitBodySchema, deviceUnitListQuerySchema, deviceUnitPatchSchema } from '#shared/schemas/device-units.ts';
 import { instrumentBodySchema, instrumentListQuerySchema, instrumentPatchSchema } from '#shared/schemas/instruments.ts';
 import { idParamsSchema } from '#shared/schemas/list-query.ts';
@@ -6,7 +7,41 @@ import { makerBodySchema, makerListQuerySchema, makerPatchSchema } from '#shared
 import { modelBodySchema, modelListQuerySchema, modelPatchSchema } from '#shared/schemas/models.ts';
 import { requireCapability } from '../http/require-capability.ts';
 import { parseWith } from '../http/validate.ts';
+import type { Caller } from '../core/caller.ts';
 import type { Services } from '../services/index.ts';
+
+/** What each catalogue service offers: list, create, read and update, all as a caller. */
+interface CatalogService<Q, B, P> {
+  list(caller: Caller, query: Q): Promise<unknown>;
+  create(caller: Caller, body: B): Promise<unknown>;
+  get(caller: Caller, id: string): Promise<unknown>;
+  update(caller: Caller, id: string, patch: P): Promise<unknown>;
+}
+
+/** The four routes of one catalogue resource; `key` names the record in the answers. */
+function catalogResource<Q, B, P>(
+  router: Router,
+  path: string,
+  key: string,
+  service: CatalogService<Q, B, P>,
+  schemas: { list: ZodType<Q>; body: ZodType<B>; patch: ZodType<P> },
+): void {
+  const read = requireCapability('lab.enter');
+  const write = requireCapability('catalog.manage');
+  router.get(path, read, async (req, res) => {
+    res.json(await service.list(req.caller, parseWith(schemas.list, req.query, 'query')));
+  });
+  router.post(path, write, async (req, res) => {
+    res.status(201).json({ [key]: await service.create(req.caller, parseWith(schemas.body, req.body)) });
+  });
+  router.get(`${path}/:id`, read, async (req, res) => {
+    res.json({ [key]: await service.get(req.caller, parseWith(idParamsSchema, req.params, 'params').id) });
+  });
+  router.patch(`${path}/:id`, write, async (req, res) => {
+    const { id } = parseWith(idParamsSchema, req.params, 'params');
+    res.json({ [key]: await service.update(req.caller, id, parseWith(schemas.patch, req.body)) });
+  });
+}
 
 /**
  * /api/lab/makers, /models, /units, /instruments: the catalogue. Every member of staff reads it;
@@ -14,64 +49,13 @@ import type { Services } from '../services/index.ts';
  */
 export function catalogRoutes(s: Pick<Services, 'makers' | 'models' | 'deviceUnits' | 'instruments'>): Router {
   const router = Router();
-  const read = requireCapability('lab.enter');
-  const write = requireCapability('catalog.manage');
-
-  router.get('/lab/makers', read, async (req, res) => {
-    res.json(await s.makers.list(req.caller, parseWith(makerListQuerySchema, req.query, 'query')));
+  catalogResource(router, '/lab/makers', 'maker', s.makers, { list: makerListQuerySchema, body: makerBodySchema, patch: makerPatchSchema });
+  catalogResource(router, '/lab/models', 'model', s.models, { list: modelListQuerySchema, body: modelBodySchema, patch: modelPatchSchema });
+  catalogResource(router, '/lab/units', 'unit', s.deviceUnits, { list: deviceUnitListQuerySchema, body: deviceUnitBodySchema, patch: deviceUnitPatchSchema });
+  catalogResource(router, '/lab/instruments', 'instrument', s.instruments, {
+    list: instrumentListQuerySchema,
+    body: instrumentBodySchema,
+    patch: instrumentPatchSchema,
   });
-  router.post('/lab/makers', write, async (req, res) => {
-    res.status(201).json({ maker: await s.makers.create(req.caller, parseWith(makerBodySchema, req.body)) });
-  });
-  router.get('/lab/makers/:id', read, async (req, res) => {
-    res.json({ maker: await s.makers.get(req.caller, parseWith(idParamsSchema, req.params, 'params').id) });
-  });
-  router.patch('/lab/makers/:id', write, async (req, res) => {
-    const { id } = parseWith(idParamsSchema, req.params, 'params');
-    res.json({ maker: await s.makers.update(req.caller, id, parseWith(makerPatchSchema, req.body)) });
-  });
-
-  router.get('/lab/models', read, async (req, res) => {
-    res.json(await s.models.list(req.caller, parseWith(modelListQuerySchema, req.query, 'query')));
-  });
-  router.post('/lab/models', write, async (req, res) => {
-    res.status(201).json({ model: await s.models.create(req.caller, parseWith(modelBodySchema, req.body)) });
-  });
-  router.get('/lab/models/:id', read, async (req, res) => {
-    res.json({ model: await s.models.get(req.caller, parseWith(idParamsSchema, req.params, 'params').id) });
-  });
-  router.patch('/lab/models/:id', write, async (req, res) => {
-    const { id } = parseWith(idParamsSchema, req.params, 'params');
-    res.json({ model: await s.models.update(req.caller, id, parseWith(modelPatchSchema, req.body)) });
-  });
-
-  router.get('/lab/units', read, async (req, res) => {
-    res.json(await s.deviceUnits.list(req.caller, parseWith(deviceUnitListQuerySchema, req.query, 'query')));
-  });
-  router.post('/lab/units', write, async (req, res) => {
-    res.status(201).json({ unit: await s.deviceUnits.create(req.caller, parseWith(deviceUnitBodySchema, req.body)) });
-  });
-  router.get('/lab/units/:id', read, async (req, res) => {
-    res.json({ unit: await s.deviceUnits.get(req.caller, parseWith(idParamsSchema, req.params, 'params').id) });
-  });
-  router.patch('/lab/units/:id', write, async (req, res) => {
-    const { id } = parseWith(idParamsSchema, req.params, 'params');
-    res.json({ unit: await s.deviceUnits.update(req.caller, id, parseWith(deviceUnitPatchSchema, req.body)) });
-  });
-
-  router.get('/lab/instruments', read, async (req, res) => {
-    res.json(await s.instruments.list(req.caller, parseWith(instrumentListQuerySchema, req.query, 'query')));
-  });
-  router.post('/lab/instruments', write, async (req, res) => {
-    res.status(201).json({ instrument: await s.instruments.create(req.caller, parseWith(instrumentBodySchema, req.body)) });
-  });
-  router.get('/lab/instruments/:id', read, async (req, res) => {
-    res.json({ instrument: await s.instruments.get(req.caller, parseWith(idParamsSchema, req.params, 'params').id) });
-  });
-  router.patch('/lab/instruments/:id', write, async (req, res) => {
-    const { id } = parseWith(idParamsSchema, req.params, 'params');
-    res.json({ instrument: await s.instruments.update(req.caller, id, parseWith(instrumentPatchSchema, req.body)) });
-  });
-
   return router;
 }

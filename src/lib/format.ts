@@ -2,8 +2,10 @@
  * Every number, date and unit the pages print goes through here. Unit conversions come from
  * shared/measurement/units.ts (re-exported for the pages), so a figure is converted one way only.
  */
+import { formatFigure } from '#shared/format/figure.ts';
 import { minorToMajor } from '#shared/money/money.ts';
 
+export { formatFigure } from '#shared/format/figure.ts';
 export { wm2ToMwCm2 } from '#shared/measurement/units.ts';
 
 const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
@@ -28,23 +30,7 @@ export function minutesFromSeconds(seconds: number): string {
   return `${m} ${m === 1 ? 'minute' : 'minutes'}`;
 }
 
-/**
- * Figures keep about three significant digits: enough to compare with a report, without
- * pretending to more precision than a bench gives.
- */
 const grouping = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 0 });
-
-/** 3 significant digits for small values, whole numbers from 1000 up (grouped: 1,234). */
-export function formatFigure(value: number): string {
-  if (!Number.isFinite(value)) return '—';
-  const abs = Math.abs(value);
-  if (abs >= 1000) return grouping.format(value);
-  if (abs === 0) return '0';
-  const digits = abs >= 100 ? 0 : abs >= 10 ? 1 : abs >= 1 ? 2 : Math.min(6, 2 - Math.floor(Math.log10(abs)));
-  const text = value.toFixed(digits);
-  // "-0.00" says nothing a plain zero does not.
-  return Number(text) === 0 ? '0' : text;
-}
 
 /** Counts: whole numbers, grouped (1,401). */
 export function formatCount(value: number): string {

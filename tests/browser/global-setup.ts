@@ -7,7 +7,6 @@
 import { randomUUID } from 'node:crypto';
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
@@ -16,6 +15,7 @@ import { CHROMIUM_PATH } from '#scripts/lib/chromium.ts';
 import { buildClient, knexCli, ROOT, seedDemoData } from '#scripts/lib/run-step.ts';
 import { startFakeSmtp, type FakeSmtp } from '#server/mail/fake-smtp.ts';
 import { startFakePaymentProvider, type FakePaymentProvider } from '#server/payments/fake-provider/start-fake-provider.ts';
+import { freePort } from '#scripts/lib/free-port.ts';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -29,17 +29,6 @@ declare module 'vitest' {
 }
 
 const E2E_DATABASE = 'benchlight_e2e';
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const port = (srv.address() as net.AddressInfo).port;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
 
 async function waitHealthy(url: string, child: ChildProcess, log: () => string) {
   const deadline = Date.now() + 60_000;

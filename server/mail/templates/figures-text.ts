@@ -1,28 +1,16 @@
 /**
  * Key figures of a report as e-mail lines. Numbers keep about three significant digits, as on the
- * pages (src/lib/format.ts follows the same rule); irradiance in mW/cm² with W/m² beside it
+ * pages (shared/format/figure.ts, one rule for both); irradiance in mW/cm² with W/m² beside it
  * (1 mW/cm² = 10 W/m²), since an e-mail cannot know the reader's chosen units.
  */
-export interface KeyFiguresLike {
-  centerMwCm2At15: number | null;
-  centerMwCm2At30: number | null;
-  redSharePct: number | null;
-  spread50CmAt15: number | null;
-  footprintUniformity: number | null;
-  measuredOverClaimed: number | null;
-  pricePer100Cm2At30: number | null;
-  currency: string | null;
-}
+import type { KeyFigures } from '#shared/lab/report-snapshot.ts';
+import { formatFigure } from '#shared/format/figure.ts';
 
-export function figure(value: number): string {
-  if (!Number.isFinite(value)) return '—';
-  const abs = Math.abs(value);
-  if (abs >= 1000) return new Intl.NumberFormat('en-GB', { maximumFractionDigits: 0 }).format(value);
-  if (abs === 0) return '0';
-  const digits = abs >= 100 ? 0 : abs >= 10 ? 1 : abs >= 1 ? 2 : Math.min(6, 2 - Math.floor(Math.log10(abs)));
-  const text = value.toFixed(digits);
-  return Number(text) === 0 ? '0' : text;
-}
+/** The key figures a report freezes (the mail reads the same object as the pages). */
+export type KeyFiguresLike = KeyFigures;
+
+/** Numbers as the pages print them (one rule for both). */
+export const figure = formatFigure;
 
 const irradiance = (mwCm2: number) => `${figure(mwCm2)} mW/cm² (${figure(mwCm2 * 10)} W/m²)`;
 

@@ -1,9 +1,9 @@
 import { useId } from 'react';
 import { STANDARD_LEVELS_PCT } from '#shared/measurement/plane/levels.ts';
 import { useDisplayUnits } from '#src/lib/display-units.tsx';
-import { COVERAGE_GRADIENT_STOPS } from './coverage-colors.ts';
 import { ISOLINE_DASH } from './coverage-legend.tsx';
 import { DATA_COLORS } from './data-colors.ts';
+import { GradientScale } from './gradient-scale.tsx';
 
 const LEGEND_TICKS = [0, 25, 50, 80, 100];
 
@@ -31,34 +31,14 @@ export function UnmeasuredPattern({ id }: { id: string }) {
  */
 export function BodyCoverageLegend({ peakMwCm2 }: { peakMwCm2: number }) {
   const units = useDisplayUnits();
-  const gradientId = `bg${useId().replace(/:/g, '')}`;
   const hatchId = `bh${useId().replace(/:/g, '')}`;
-  const width = 280;
-  const pad = 18;
   return (
     <div className="flex flex-wrap items-start gap-x-10 gap-y-4 font-sans text-xs text-ink-soft">
       <div>
         <p className="mb-1 font-semibold text-ink">
           Irradiance, % of this plane's peak ({units.formatIrradiance(peakMwCm2)})
         </p>
-        <svg width={width + 2 * pad} height={40} aria-hidden="true" fontFamily="Inter, system-ui, sans-serif">
-          <defs>
-            <linearGradient id={gradientId}>
-              {COVERAGE_GRADIENT_STOPS.map((s) => (
-                <stop key={s.offset} offset={s.offset} stopColor={s.color} />
-              ))}
-            </linearGradient>
-          </defs>
-          <rect x={pad} y={2} width={width} height={14} fill={`url(#${gradientId})`} stroke={DATA_COLORS.inkMuted} strokeWidth={0.75} />
-          {LEGEND_TICKS.map((t) => (
-            <g key={t}>
-              <line x1={pad + (t / 100) * width} x2={pad + (t / 100) * width} y1={16} y2={21} stroke={DATA_COLORS.inkMuted} />
-              <text x={pad + (t / 100) * width} y={33} textAnchor="middle" fontSize={11} fill={DATA_COLORS.ink}>
-                {t} %
-              </text>
-            </g>
-          ))}
-        </svg>
+        <GradientScale width={280} marks={LEGEND_TICKS.map((t) => ({ at: t / 100, label: `${t} %` }))} />
         <p className="sr-only">Pale cells are dim, dark cells bright: from 0 to {units.formatIrradiance(peakMwCm2)}.</p>
       </div>
       <ul className="space-y-1" aria-label="Key to the figure's lines and areas">

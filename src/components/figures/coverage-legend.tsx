@@ -1,8 +1,7 @@
-import { useId } from 'react';
 import { STANDARD_LEVELS_PCT } from '#shared/measurement/plane/levels.ts';
-import { COVERAGE_GRADIENT_STOPS } from './coverage-colors.ts';
 import { DATA_COLORS } from './data-colors.ts';
 import { formatFigure } from '#src/lib/format.ts';
+import { GradientScale } from './gradient-scale.tsx';
 
 /** Line patterns tell the isolines apart without colour. */
 export const ISOLINE_DASH: Record<number, string | undefined> = { 80: undefined, 50: '7 4', 25: '2 3' };
@@ -15,9 +14,6 @@ const LEGEND_TICKS = [0, 25, 50, 80, 100];
  */
 export function CoverageLegend({ peak, scaleMax }: { peak: number; scaleMax?: number }) {
   const top = scaleMax ?? peak;
-  const gradientId = `g${useId().replace(/:/g, '')}`;
-  const width = 300;
-  const pad = 18; // room for the end labels
   return (
     <div className="flex flex-wrap items-start gap-x-10 gap-y-4 font-sans text-xs text-ink-soft">
       <div>
@@ -26,24 +22,7 @@ export function CoverageLegend({ peak, scaleMax }: { peak: number; scaleMax?: nu
             ? `Irradiance, % of this plane's peak (${formatFigure(peak)} mW/cm²)`
             : `Irradiance, mW/cm² (one scale for the maps shown together: 0 to ${formatFigure(scaleMax)})`}
         </p>
-        <svg width={width + 2 * pad} height={40} aria-hidden="true" fontFamily="Inter, system-ui, sans-serif">
-          <defs>
-            <linearGradient id={gradientId}>
-              {COVERAGE_GRADIENT_STOPS.map((s) => (
-                <stop key={s.offset} offset={s.offset} stopColor={s.color} />
-              ))}
-            </linearGradient>
-          </defs>
-          <rect x={pad} y={2} width={width} height={14} fill={`url(#${gradientId})`} stroke={DATA_COLORS.inkMuted} strokeWidth={0.75} />
-          {LEGEND_TICKS.map((t) => (
-            <g key={t}>
-              <line x1={pad + (t / 100) * width} x2={pad + (t / 100) * width} y1={16} y2={21} stroke={DATA_COLORS.inkMuted} />
-              <text x={pad + (t / 100) * width} y={33} textAnchor="middle" fontSize={11} fill={DATA_COLORS.ink}>
-                {scaleMax === undefined ? `${t} %` : formatFigure((t / 100) * top)}
-              </text>
-            </g>
-          ))}
-        </svg>
+        <GradientScale marks={LEGEND_TICKS.map((t) => ({ at: t / 100, label: scaleMax === undefined ? `${t} %` : formatFigure((t / 100) * top) }))} />
         <p className="sr-only">
           Pale cells are dim, dark cells bright: from 0 to {formatFigure(top)} mW/cm².
         </p>

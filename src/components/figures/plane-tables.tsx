@@ -5,6 +5,8 @@ import type { FootprintCm } from '#shared/measurement/plane/uniformity.ts';
 import type { GridPlane } from '#shared/measurement/check/analyze-grid.ts';
 import { formatFigure, formatLength, formatPercent } from '#src/lib/format.ts';
 import { Irradiance } from './irradiance.tsx';
+import { TRADE_CHART_UNITS, type ChartUnits } from './chart-units.ts';
+import { cn } from '#src/lib/cn.ts';
 
 const th = 'bl-label border-b border-rule px-3 py-2 text-left align-bottom';
 const td = 'border-b border-rule px-3 py-2 text-sm align-top';
@@ -183,24 +185,29 @@ export function SpreadWidthsTable({ analysis, plane }: { analysis: PlaneAnalysis
   );
 }
 
-/** The measured readings of a plane laid out as on the bench: rows by y (top = highest), columns by x. */
-export function PlaneReadingsTable({ plane }: { plane: GridPlane }) {
+/**
+ * The measured readings of a plane laid out as on the bench: rows by y (top = highest), columns
+ * by x. In the trade's units (mW/cm², cm) unless `units` gives the reader's; `title` names it.
+ */
+export function PlaneReadingsTable({ plane, title, units = TRADE_CHART_UNITS, className }: { plane: GridPlane; title?: string; units?: ChartUnits; className?: string }) {
   const merged = mergeRepeatedPoints(plane.points);
   const xs = [...new Set(merged.map((p) => p.xCm))].sort((a, b) => a - b);
   const ys = [...new Set(merged.map((p) => p.yCm))].sort((a, b) => b - a);
   const at = new Map(merged.map((p) => [`${p.xCm}|${p.yCm}`, p.value]));
+  const len = (cm: number) => formatLength(units.lengthValue(cm));
+  const name = title ?? `Readings at ${formatLength(plane.distanceCm)} cm`;
   return (
-    <div role="region" aria-label={`Readings at ${formatLength(plane.distanceCm)} cm`} tabIndex={0} className="overflow-x-auto">
+    <div role="region" aria-label={name} tabIndex={0} className={cn('overflow-x-auto', className)}>
       <table className="border-collapse font-sans text-xs tabular-nums">
         <caption className="pb-2 text-left text-sm font-semibold text-ink">
-          Readings at {formatLength(plane.distanceCm)} cm, mW/cm² (rows: y, columns: x, in cm)
+          {name}, {units.irradiance} (rows: y, columns: x, in {units.length})
         </caption>
         <thead>
           <tr>
             <th scope="col" className="px-2 py-1 text-right text-ink-soft">y \ x</th>
             {xs.map((x) => (
               <th key={x} scope="col" className="border-b border-rule px-2 py-1 text-right">
-                {formatLength(x)}
+                {len(x)}
               </th>
             ))}
           </tr>
@@ -209,13 +216,13 @@ export function PlaneReadingsTable({ plane }: { plane: GridPlane }) {
           {ys.map((y) => (
             <tr key={y}>
               <th scope="row" className="border-r border-rule px-2 py-1 text-right">
-                {formatLength(y)}
+                {len(y)}
               </th>
               {xs.map((x) => {
                 const v = at.get(`${x}|${y}`);
                 return (
                   <td key={x} className="px-2 py-1 text-right">
-                    {v === undefined ? <span className="text-ink-muted">—</span> : formatFigure(v)}
+                    {v === undefined ? <span className="text-ink-muted">—</span> : formatFigure(units.irradianceValue(v))}
                   </td>
                 );
               })}

@@ -1,16 +1,12 @@
 import { useId } from 'react';
-import { COVERAGE_GRADIENT_STOPS } from '#src/components/figures/coverage-colors.ts';
 import { DATA_COLORS } from '#src/components/figures/data-colors.ts';
 import { formatFigure } from '#src/lib/format.ts';
 import { BELOW_TARGET_PATTERN, NOT_MEASURED_PATTERN, PatternDefs } from './map-patterns.tsx';
+import { GradientScale } from '#src/components/figures/gradient-scale.tsx';
 
 /** The dose scale in J/cm² with the target dose and the cap marked, and the key to the patterns. */
 export function DoseLegend({ scaleMax, doseJCm2, capJCm2 }: { scaleMax: number; doseJCm2: number; capJCm2: number | null }) {
-  const gradientId = `dg${useId().replace(/:/g, '')}`;
   const patternPrefix = `dp${useId().replace(/:/g, '')}`;
-  const width = 280;
-  const pad = 18;
-  const x = (v: number) => pad + (Math.min(v, scaleMax) / scaleMax) * width;
   const marks = [
     { v: 0, label: '0' },
     { v: doseJCm2, label: `H* ${formatFigure(doseJCm2)}` },
@@ -24,24 +20,7 @@ export function DoseLegend({ scaleMax, doseJCm2, capJCm2 }: { scaleMax: number; 
       </svg>
       <div>
         <p className="mb-1 font-semibold text-ink">Dose, J/cm²</p>
-        <svg width={width + 2 * pad} height={44} aria-hidden="true" fontFamily="Inter, system-ui, sans-serif">
-          <defs>
-            <linearGradient id={gradientId}>
-              {COVERAGE_GRADIENT_STOPS.map((s) => (
-                <stop key={s.offset} offset={s.offset} stopColor={s.color} />
-              ))}
-            </linearGradient>
-          </defs>
-          <rect x={pad} y={2} width={width} height={14} fill={`url(#${gradientId})`} stroke={DATA_COLORS.inkMuted} strokeWidth={0.75} />
-          {marks.map((m) => (
-            <g key={m.label}>
-              <line x1={x(m.v)} x2={x(m.v)} y1={m.v === doseJCm2 ? 0 : 16} y2={22} stroke={DATA_COLORS.ink} strokeWidth={m.v === doseJCm2 ? 2 : 1} />
-              <text x={x(m.v)} y={35} textAnchor="middle" fontSize={11} fill={DATA_COLORS.ink}>
-                {m.label}
-              </text>
-            </g>
-          ))}
-        </svg>
+        <GradientScale width={280} marks={marks.map((m) => ({ at: Math.min(m.v, scaleMax) / scaleMax, label: m.label, strong: m.v === doseJCm2 }))} />
       </div>
       <ul className="space-y-1" aria-label="Key to the map's patterns and marks">
         <li className="flex items-center gap-2">

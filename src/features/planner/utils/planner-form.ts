@@ -3,6 +3,7 @@
  * Numbers are typed as text so a half-typed value never jumps; a field that does not read gives
  * an error and no plans, never a guess.
  */
+import { BODY_ZONE_LABELS } from '#src/components/figures/body-zones.ts';
 import { DEFAULT_DOSE_TARGETS_JCM2 } from '#shared/measurement/dose/radiant-exposure.ts';
 import type { BodyZoneName } from '#shared/measurement/plane/body-outline.ts';
 import { BODY_SIZE_PRESETS, type BodySizePreset } from '#shared/measurement/planner/body-sizes.ts';
@@ -32,16 +33,8 @@ export interface PlannerDefaults {
   coverShare?: number;
 }
 
-export const ZONE_LABELS: Readonly<Record<BodyZoneName, string>> = {
-  face: 'Face',
-  neck: 'Neck',
-  'left-shoulder': 'Left shoulder',
-  'right-shoulder': 'Right shoulder',
-  chest: 'Chest',
-  abdomen: 'Abdomen',
-  'left-thigh': 'Left thigh',
-  'right-thigh': 'Right thigh',
-};
+/** The outline's zones as readers see them named: one list for the report's map and the planner. */
+export const ZONE_LABELS = BODY_ZONE_LABELS;
 
 export const BODY_SIZE_LABELS: Readonly<Record<BodySizeChoice, string>> = {
   small: 'Small',

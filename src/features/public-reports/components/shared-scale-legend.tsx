@@ -1,41 +1,20 @@
-import { useId } from 'react';
 import { STANDARD_LEVELS_PCT } from '#shared/measurement/plane/levels.ts';
-import { COVERAGE_GRADIENT_STOPS } from '#src/components/figures/coverage-colors.ts';
 import { ISOLINE_DASH } from '#src/components/figures/coverage-legend.tsx';
 import { DATA_COLORS } from '#src/components/figures/data-colors.ts';
 import { useDisplayUnits } from '#src/lib/display-units.tsx';
 import { formatFigure } from '#src/lib/format.ts';
+import { GradientScale } from '#src/components/figures/gradient-scale.tsx';
 
 const TICKS = [0, 0.25, 0.5, 0.75, 1];
 
 /** One colour scale for every map beside it (0 to the largest peak), and the key to the isolines. */
 export function SharedScaleLegend({ scaleMax }: { scaleMax: number }) {
   const units = useDisplayUnits();
-  const gradientId = `g${useId().replace(/:/g, '')}`;
-  const width = 320;
-  const pad = 20;
   return (
     <div className="flex flex-wrap items-start gap-x-10 gap-y-4 font-sans text-xs text-ink-soft">
       <div>
         <p className="mb-1 font-semibold text-ink">Irradiance ({units.irradiance}), one scale for every map below</p>
-        <svg width={width + 2 * pad} height={40} aria-hidden="true" fontFamily="Inter, system-ui, sans-serif">
-          <defs>
-            <linearGradient id={gradientId}>
-              {COVERAGE_GRADIENT_STOPS.map((s) => (
-                <stop key={s.offset} offset={s.offset} stopColor={s.color} />
-              ))}
-            </linearGradient>
-          </defs>
-          <rect x={pad} y={2} width={width} height={14} fill={`url(#${gradientId})`} stroke={DATA_COLORS.inkMuted} strokeWidth={0.75} />
-          {TICKS.map((t) => (
-            <g key={t}>
-              <line x1={pad + t * width} x2={pad + t * width} y1={16} y2={21} stroke={DATA_COLORS.inkMuted} />
-              <text x={pad + t * width} y={33} textAnchor="middle" fontSize={11} fill={DATA_COLORS.ink}>
-                {formatFigure(units.irradianceValue(t * scaleMax))}
-              </text>
-            </g>
-          ))}
-        </svg>
+        <GradientScale width={320} marks={TICKS.map((t) => ({ at: t, label: formatFigure(units.irradianceValue(t * scaleMax)) }))} />
         <p className="sr-only">
           Pale cells are dim, dark cells bright, on the same scale in every map: from 0 to {units.formatIrradiance(scaleMax)}.
         </p>

@@ -1,0 +1,13 @@
+import net from 'node:net';
+
+/** A port nothing listens on right now, on 127.0.0.1 (the system picks it). */
+export function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = net.createServer();
+    srv.listen(0, '127.0.0.1', () => {
+      const port = (srv.address() as net.AddressInfo).port;
+      srv.close(() => resolve(port));
+    });
+    srv.on('error', reject);
+  });
+}
